@@ -1,0 +1,21 @@
+import type { Metadata, Viewport } from "next";
+import "@fontsource-variable/inter";
+import "./globals.css";
+import { ToastProvider } from "@/components/ui/toast";
+
+export const metadata: Metadata = {
+  title: { default: "Spanwright", template: "%s · Spanwright" },
+  description: "Plan, check and sign off slackline, longline and highline rigs with your crew.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#11573d" };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en">
+      <body>
+        <ToastProvider>{children}</ToastProvider>
+      </body>
+    </html>
+  );
+}

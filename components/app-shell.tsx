@@ -1,0 +1,37 @@
+import Link from "next/link";
+import type { ReactNode } from "react";
+import { AppNav } from "./app-nav";
+
+interface AppShellProps {
+  crewSwitcher?: ReactNode;
+  accountMenu?: ReactNode;
+  children: ReactNode;
+}
+
+/** The frame of every signed-in page: brand, crew switcher, account menu, sections, content. */
+export function AppShell({ crewSwitcher, accountMenu, children }: AppShellProps) {
+  return (
+    <div className="min-h-screen md:grid md:grid-cols-[theme(spacing.rail)_1fr]">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-3">
+        Skip to content
+      </a>
+      <header className="border-b border-ink-200 bg-white md:min-h-screen md:border-b-0 md:border-r">
+        <div className="flex items-center justify-between gap-3 px-4 py-3 md:flex-col md:items-stretch">
+          <Link href="/rigs" className="text-xl font-bold text-spruce-800 no-underline hover:no-underline">
+            Spanwright
+          </Link>
+          <div className="flex items-center gap-2 md:flex-col md:items-stretch">
+            {crewSwitcher}
+            {accountMenu}
+          </div>
+        </div>
+        <div className="px-2 pb-2 md:px-3">
+          <AppNav />
+        </div>
+      </header>
+      <main id="main" className="mx-auto w-full max-w-page px-gutter py-6">
+        {children}
+      </main>
+    </div>
+  );
+}

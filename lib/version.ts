@@ -1,0 +1,3 @@
+import manifest from "@/package.json";
+
+export const APP_VERSION: string = manifest.version;

@@ -1,0 +1,17 @@
+import net from "node:net";
+import { StackError } from "./fail";
+
+/** Resolves when nothing listens on 127.0.0.1:port; otherwise a StackError naming the port. */
+export async function assertPortFree(port: number, what: string, envName: string): Promise<void> {
+  const free = await new Promise<boolean>((resolve) => {
+    const probe = net.createServer();
+    probe.once("error", () => resolve(false));
+    probe.once("listening", () => probe.close(() => resolve(true)));
+    probe.listen(port, "127.0.0.1");
+  });
+  if (!free) {
+    throw new StackError(
+      `Port ${port} on 127.0.0.1, needed for ${what}, is already taken: stop whatever uses it (\`ss -ltnp 'sport = :${port}'\` shows it) or set ${envName} to another port.`,
+    );
+  }
+}

@@ -1,0 +1,104 @@
+import path from "node:path";
+import { assertPortFree } from "./ports";
+import { databaseUrl, ensureDatabase, startCluster, stopCluster, type PostgresCluster } from "./postgres";
+import { startS3Fake, type S3Fake } from "./s3-fake";
+import { startSmtpFake, type SmtpFake } from "./smtp-fake";
+import { migrateAndSeed } from "./migrate";
+
+export type Profile = "dev" | "test";
+
+export interface StackSettings {
+  profile: Profile;
+  appPort: number;
+  pgPort: number;
+  s3Port: number;
+  smtpPort: number;
+  database: string;
+  dataDir: string;
+}
+
+export const projectDir = path.resolve(__dirname, "..", "..");
+
+function portFromEnv(name: string, fallback: number): number {
+  const raw = process.env[name];
+  if (raw === undefined || raw === "") return fallback;
+  const port = Number(raw);
+  if (!Number.isInteger(port) || port < 1024 || port > 65535) {
+    throw new Error(`${name}=${raw} is not a usable port: give a whole number from 1024 to 65535.`);
+  }
+  return port;
+}
+
+/** Ports and folders of each profile: the test profile never touches the development data. */
+export function stackSettings(profile: Profile): StackSettings {
+  const dev = profile === "dev";
+  return {
+    profile,
+    appPort: portFromEnv(dev ? "PORT" : "TEST_PORT", dev ? 3000 : 3100),
+    pgPort: portFromEnv(dev ? "PG_PORT" : "TEST_PG_PORT", dev ? 5491 : 5492),
+    s3Port: portFromEnv(dev ? "S3_PORT" : "TEST_S3_PORT", dev ? 4591 : 4592),
+    smtpPort: portFromEnv(dev ? "SMTP_PORT" : "TEST_SMTP_PORT", dev ? 2591 : 2592),
+    database: dev ? "spanwright" : "spanwright_test",
+    dataDir: path.join(projectDir, ".data", profile),
+  };
+}
+
+export interface RunningStack {
+  settings: StackSettings;
+  /** The environment the app and the tests run with. */
+  env: Record<string, string>;
+  stop(): Promise<void>;
+}
+
+const BUCKET = "spanwright-uploads";
+
+/**
+ * Starts PostgreSQL, the S3 fake and the SMTP fake, migrates and seeds. On any failure, stops
+ * whatever it had already started before passing the error on.
+ */
+export async function startStack(profile: Profile): Promise<RunningStack> {
+  const settings = stackSettings(profile);
+  const prefix = profile === "dev" ? "" : "TEST_";
+  await assertPortFree(settings.appPort, "the web app", profile === "dev" ? "PORT" : "TEST_PORT");
+  await assertPortFree(settings.s3Port, "the local S3 fake", `${prefix}S3_PORT`);
+  await assertPortFree(settings.smtpPort, "the local SMTP fake", `${prefix}SMTP_PORT`);
+
+  let cluster: PostgresCluster | null = null;
+  let s3: S3Fake | null = null;
+  let smtp: SmtpFake | null = null;
+  const stop = async () => {
+    await smtp?.close().catch(() => undefined);
+    await s3?.close().catch(() => undefined);
+    if (cluster) stopCluster(cluster);
+  };
+
+  try {
+    cluster = await startCluster(projectDir, profile, settings.pgPort);
+    await ensureDatabase(cluster, settings.database, profile === "test");
+    const url = databaseUrl(cluster, settings.database);
+    await migrateAndSeed(url);
+    const mailDir = path.join(settings.dataDir, "mail");
+    s3 = await startS3Fake(settings.s3Port, path.join(settings.dataDir, "s3"), BUCKET);
+    smtp = await startSmtpFake(settings.smtpPort, mailDir);
+    const env: Record<string, string> = {
+      NODE_ENV: "production",
+      NEXT_TELEMETRY_DISABLED: "1",
+      DATABASE_URL: url,
+      APP_ORIGIN: `http://127.0.0.1:${settings.appPort}`,
+      S3_ENDPOINT: s3.endpoint,
+      S3_BUCKET: BUCKET,
+      S3_REGION: "us-east-1",
+      S3_ACCESS_KEY_ID: "S3RVER",
+      S3_SECRET_ACCESS_KEY: "S3RVER",
+      S3_FORCE_PATH_STYLE: "true",
+      SMTP_URL: `smtp://127.0.0.1:${settings.smtpPort}`,
+      MAIL_FROM: "Spanwright <no-reply@spanwright.local>",
+      DEV_MAILBOX_DIR: mailDir,
+      COOKIE_SECURE: "false",
+    };
+    return { settings, env, stop };
+  } catch (error) {
+    await stop();
+    throw error;
+  }
+}

@@ -1,0 +1,39 @@
+// `npm start`: sets up and runs the whole product on this machine; Ctrl-C stops all it started.
+import { startStack, type RunningStack } from "./services/stack";
+import { buildApp, serveApp, type AppServer } from "./services/app-server";
+import { StackError } from "./services/fail";
+import { DEMO_PASSWORD, DEMO_PEOPLE } from "../seeds/01_demo_crew";
+
+let stack: RunningStack | null = null;
+let server: AppServer | null = null;
+let stopping = false;
+
+async function shutdown(code: number): Promise<never> {
+  if (!stopping) {
+    stopping = true;
+    await server?.stop();
+    await stack?.stop();
+    console.log("spanwright: stopped.");
+  }
+  process.exit(code);
+}
+
+process.on("SIGINT", () => void shutdown(0));
+process.on("SIGTERM", () => void shutdown(0));
+
+async function main() {
+  stack = await startStack("dev");
+  await buildApp(stack.env);
+  server = await serveApp(stack.env, stack.settings.appPort);
+  console.log(`
+Spanwright is running at ${server.url}
+  PostgreSQL 127.0.0.1:${stack.settings.pgPort} (database ${stack.settings.database}), S3 fake 127.0.0.1:${stack.settings.s3Port}, SMTP fake 127.0.0.1:${stack.settings.smtpPort}
+  Demo sign-in (password ${DEMO_PASSWORD}):
+${DEMO_PEOPLE.map((p) => `    ${p.role.padEnd(7)} ${p.email}`).join("\n")}
+Press Ctrl-C to stop.`);
+}
+
+main().catch(async (error) => {
+  console.error(`spanwright: ${error instanceof StackError ? error.message : (error as Error).stack}`);
+  await shutdown(1);
+});
