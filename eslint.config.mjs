@@ -4,7 +4,7 @@ import nextTypescript from "eslint-config-next/typescript";
 const config = [
   ...nextCoreWebVitals,
   ...nextTypescript,
-  { ignores: [".next/**", "node_modules/**", ".data/**", "test-results/**", "playwright-report/**", "next-env.d.ts"] },
+  { ignores: [".next/**", ".next-test/**", "node_modules/**", ".data/**", "test-results/**", "playwright-report/**", "next-env.d.ts", "**/*.tmp.ts"] },
 ];
 
 export default config;

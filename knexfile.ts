@@ -1,18 +1,14 @@
-import path from "node:path";
 import type { Knex } from "knex";
 import { databaseUrl } from "./db/config";
+import { migrationSource } from "./migrations";
+import { seedSource } from "./seeds";
 
 const config: Knex.Config = {
   client: "pg",
   connection: databaseUrl(),
   pool: { min: 0, max: 10 },
-  migrations: {
-    directory: path.join(__dirname, "migrations"),
-    loadExtensions: [".ts"],
-    extension: "ts",
-    tableName: "knex_migrations",
-  },
-  seeds: { directory: path.join(__dirname, "seeds"), loadExtensions: [".ts"] },
+  migrations: { migrationSource, tableName: "knex_migrations" },
+  seeds: { seedSource },
 };
 
 export default config;

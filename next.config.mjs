@@ -2,6 +2,8 @@
 const nextConfig = {
   // Packages with native bindings or Node-only internals stay out of the server bundle.
   serverExternalPackages: ["knex", "pg", "@node-rs/argon2", "nodemailer"],
+  // The test run builds apart from `npm start`, so both can run side by side.
+  distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
   typedRoutes: false,
 };

@@ -27,7 +27,7 @@ async function run(command: Command, all: boolean): Promise<void> {
       console.log(names.length ? `Rolled back${all ? " every batch" : ` batch ${batch}`}: ${names.join(", ")}` : "Nothing to roll back.");
     } else {
       const [files] = await database.seed.run();
-      console.log(`Ran seeds: ${files.map((f) => f.split("/").pop()).join(", ")}`);
+      console.log(`Ran seeds: ${files.join(", ")}`);
     }
   } finally {
     await database.destroy();

@@ -1,0 +1,14 @@
+import type { Knex } from "knex";
+import * as crewsAndPeople from "./20261201000001_crews_and_people";
+
+// Every migration, in order, imported statically so that the same list loads under tsx, Vitest
+// and the Next.js server bundle alike. A unit test checks that no file of this folder is missing.
+const migrations: Record<string, Knex.Migration> = {
+  "20261201000001_crews_and_people.ts": crewsAndPeople,
+};
+
+export const migrationSource: Knex.MigrationSource<string> = {
+  getMigrations: async () => Object.keys(migrations),
+  getMigrationName: (name) => name,
+  getMigration: async (name) => migrations[name],
+};

@@ -1,0 +1,12 @@
+import type { Knex } from "knex";
+import * as demoCrew from "./01_demo_crew";
+
+// The demo seeds, in order, imported statically for the same reason as the migration list.
+const seeds: Record<string, Knex.Seed> = {
+  "01_demo_crew.ts": demoCrew,
+};
+
+export const seedSource: Knex.SeedSource<string> = {
+  getSeeds: async () => Object.keys(seeds),
+  getSeed: async (name) => seeds[name],
+};
