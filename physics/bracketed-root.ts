@@ -1,0 +1,30 @@
+import { SolveError } from "./solve-error";
+
+/**
+ * Root of a continuous f on [lo, hi] where f(lo) and f(hi) differ in sign: regula falsi with the
+ * Illinois correction (Dowell & Jarratt 1971), which keeps the bracket and converges superlinearly.
+ */
+export function bracketedRoot(f: (x: number) => number, lo: number, hi: number, what: string, tolerance = 1e-12): number {
+  let a = lo;
+  let b = hi;
+  let fa = f(a);
+  let fb = f(b);
+  if (fa === 0) return a;
+  if (fb === 0) return b;
+  if (!(fa * fb < 0)) throw new SolveError(`${what}: no sign change on [${lo}, ${hi}]`, 0, Math.min(Math.abs(fa), Math.abs(fb)));
+  for (let i = 0; i < 200; i++) {
+    const c = b - (fb * (b - a)) / (fb - fa);
+    const fc = f(c);
+    if (fc === 0) return c;
+    if (fc * fb < 0) {
+      a = b;
+      fa = fb;
+    } else {
+      fa /= 2;
+    }
+    b = c;
+    fb = fc;
+    if (Math.abs(b - a) <= tolerance * Math.max(Math.abs(a), Math.abs(b), 1e-300)) return b;
+  }
+  throw new SolveError(what, 200, Math.abs(fb));
+}

@@ -1,0 +1,35 @@
+/** Kinds of component the crew sets a minimum safety factor for. */
+export const COMPONENT_CATEGORIES = ["webbing", "connector", "sling", "anchor", "other"] as const;
+export type ComponentCategory = (typeof COMPONENT_CATEGORIES)[number];
+
+/** Crew minimums: 3 for everything (common practice, no source); the crew sets its own. */
+export const DEFAULT_MINIMUM_FACTORS: Record<ComponentCategory, number> = { webbing: 3, connector: 3, sling: 3, anchor: 3, other: 3 };
+
+export interface LoadedComponent {
+  name: string;
+  category: ComponentCategory;
+  /** Where it sits: anchor "a", "b", or the line itself. */
+  location: "a" | "b" | "line";
+  /** Minimum breaking strength, N. */
+  mbs: number;
+  /** Peak load the component sees, N. */
+  peakLoad: number;
+}
+
+export interface SafetyFactor extends LoadedComponent {
+  /** MBS / peak load, unrounded. */
+  factor: number;
+  /** Factor rounded down to two decimals for display: a failing factor is never rounded up. */
+  shown: string;
+  minimum: number;
+  passes: boolean;
+}
+
+/** MBS over peak load for every component, against the crew's minimum for its category. */
+export function safetyFactors(components: readonly LoadedComponent[], minimums: Record<ComponentCategory, number>): SafetyFactor[] {
+  return components.map((c) => {
+    const factor = c.mbs / c.peakLoad;
+    const minimum = minimums[c.category];
+    return { ...c, factor, shown: (Math.floor(factor * 100) / 100).toFixed(2), minimum, passes: factor >= minimum };
+  });
+}

@@ -1,0 +1,16 @@
+/** A solve that did not converge: the engine refuses to return a figure it is not sure of. */
+export class SolveError extends Error {
+  readonly iterations: number;
+  readonly residual: number;
+
+  constructor(what: string, iterations: number, residual: number) {
+    super(`${what} did not converge after ${iterations} iterations (scaled residual ${residual.toExponential(2)})`);
+    this.name = "SolveError";
+    this.iterations = iterations;
+    this.residual = residual;
+  }
+
+  toJSON() {
+    return { error: this.name, message: this.message, iterations: this.iterations, residual: this.residual };
+  }
+}
