@@ -36,19 +36,20 @@ async function check(suite: string, command: string, args: string[], env: NodeJS
   return ok;
 }
 
-async function vitest(env: NodeJS.ProcessEnv, reportDir: string): Promise<void> {
-  console.log("\n── unit and integration (vitest) ──");
-  const report = path.join(reportDir, "vitest.json");
+async function vitest(project: "unit" | "integration", env: NodeJS.ProcessEnv, reportDir: string): Promise<void> {
+  console.log(`\n── ${project} (vitest) ──`);
+  const report = path.join(reportDir, `vitest-${project}.json`);
   fs.rmSync(report, { force: true });
-  const code = await runLive(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`], { cwd: projectDir, env });
+  const args = ["run", "--project", project, "--reporter=default", "--reporter=json", `--outputFile.json=${report}`];
+  const code = await runLive(bin("vitest"), args, { cwd: projectDir, env });
   const result = readJson<{ numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number }>(report);
   if (!result) {
-    tallies.push({ suite: "vitest", passed: 0, failed: 1, skipped: 0 });
+    tallies.push({ suite: project, passed: 0, failed: 1, skipped: 0 });
     return;
   }
   // A suite file that fails to load counts as a failure even when no test inside it ran.
   const failed = result.numFailedTests + (code !== 0 && result.numFailedTests === 0 ? 1 : 0);
-  tallies.push({ suite: "vitest", passed: result.numPassedTests, failed, skipped: result.numPendingTests + result.numTodoTests });
+  tallies.push({ suite: project, passed: result.numPassedTests, failed, skipped: result.numPendingTests + result.numTodoTests });
 }
 
 async function playwright(env: NodeJS.ProcessEnv, reportDir: string): Promise<void> {
@@ -86,13 +87,15 @@ async function main(): Promise<number> {
   ) as NodeJS.ProcessEnv;
   await check("lint", bin("eslint"), ["."]);
   await check("typecheck", bin("tsc"), ["--noEmit"]);
-  await vitest(testEnv, reportDir);
+  await vitest("unit", testEnv, reportDir);
   const built = await check("build", bin("next"), ["build"], { ...testEnv, NODE_ENV: "production" });
   if (built) {
+    // Integration suites talk to the real server over HTTP as well as to the real database.
     server = await serveApp({ ...stack.env, NEXT_DIST_DIR: ".next-test" }, stack.settings.appPort);
+    await vitest("integration", { ...testEnv, APP_URL: server.url }, reportDir);
     await playwright({ ...testEnv, E2E_BASE_URL: server.url, CHROMIUM_PATH }, reportDir);
   } else {
-    tallies.push({ suite: "playwright", passed: 0, failed: 1, skipped: 0 });
+    tallies.push({ suite: "integration", passed: 0, failed: 1, skipped: 0 }, { suite: "playwright", passed: 0, failed: 1, skipped: 0 });
   }
   return summarise();
 }

@@ -1,0 +1,58 @@
+import { NextResponse, type NextRequest } from "next/server";
+import { ZodError } from "zod";
+import { authorize, AccessError, type CrewContext } from "./authz";
+import { RequestError, invalidInput } from "./http-errors";
+import type { Action } from "./roles";
+
+const MUTATING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
+
+/** Mutating requests must come from our own pages: the Origin header names this host. */
+export function assertSameOrigin(request: Request): void {
+  if (!MUTATING.has(request.method)) return;
+  const origin = request.headers.get("origin");
+  const host = request.headers.get("x-forwarded-host") ?? request.headers.get("host");
+  let originHost: string | null = null;
+  try {
+    originHost = origin ? new URL(origin).host : null;
+  } catch {
+    originHost = null;
+  }
+  if (!originHost || originHost !== host) {
+    throw new AccessError(403, "This request did not come from a Spanwright page (its Origin header is missing or names another site).");
+  }
+}
+
+/** Turns any error into the JSON answer a client can show; only a real fault answers 500. */
+export function errorResponse(error: unknown): NextResponse {
+  if (error instanceof ZodError) error = invalidInput(error);
+  if (error instanceof AccessError) return NextResponse.json({ error: error.message }, { status: error.status });
+  if (error instanceof RequestError) {
+    return NextResponse.json({ error: error.message, fieldErrors: error.fieldErrors }, { status: error.status, headers: error.headers });
+  }
+  console.error(error);
+  return NextResponse.json({ error: "Something went wrong on the server; nothing was saved. Try again." }, { status: 500 });
+}
+
+/** Reads a JSON body, answering 400 (not 500) when it is not JSON. */
+export async function readJson(request: Request): Promise<unknown> {
+  try {
+    return await request.json();
+  } catch {
+    throw new RequestError(400, "The request body is not valid JSON.");
+  }
+}
+
+type Handler<P> = (context: CrewContext, request: NextRequest, params: P) => Promise<Response>;
+
+/** A route handler that works on the caller's crew: origin check, authorization, error mapping. */
+export function crewRoute<P = Record<string, never>>(action: Action, handler: Handler<P>) {
+  return async (request: NextRequest, segment: { params: Promise<P> }) => {
+    try {
+      assertSameOrigin(request);
+      const context = await authorize(action);
+      return await handler(context, request, await segment.params);
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}

@@ -1,0 +1,32 @@
+// The crew roles, from least to most, and what each may do: the one table every check reads.
+export const ROLES = ["member", "rigger", "lead", "owner"] as const;
+export type Role = (typeof ROLES)[number];
+
+export const PERMISSIONS = {
+  "crew.read": "member",
+  "crew.settings": "lead",
+  "crew.invite": "owner",
+  "crew.roles": "owner",
+  "kit.read": "member",
+  "kit.write": "rigger",
+  "slip.read": "member",
+  "slip.write": "rigger",
+  "slip.publish": "lead",
+  "site.read": "member",
+  "site.write": "rigger",
+  "rig.read": "member",
+  "rig.write": "rigger",
+  "rig.review": "lead",
+  "field.record": "member",
+} as const satisfies Record<string, Role>;
+
+export type Action = keyof typeof PERMISSIONS;
+
+export function isRole(value: unknown): value is Role {
+  return typeof value === "string" && (ROLES as readonly string[]).includes(value);
+}
+
+/** True when `role` is at least the least role the action needs. */
+export function can(role: Role, action: Action): boolean {
+  return ROLES.indexOf(role) >= ROLES.indexOf(PERMISSIONS[action]);
+}
