@@ -67,7 +67,7 @@ function solveBand(a: Float64Array[], b: Float64Array): void {
   }
 }
 
-export function solveManyNodeLine(line: ManyNodeLine, tolerance = 1e-10, maxIterations = 200): ManyNodeResult {
+export function solveManyNodeLine(line: ManyNodeLine, tolerance = 1e-8, maxIterations = 200): ManyNodeResult {
   const n = line.elements;
   const l0 = line.length / n;
   const walkerNode = Math.round(line.walkerArcFraction * n);
@@ -76,9 +76,9 @@ export function solveManyNodeLine(line: ManyNodeLine, tolerance = 1e-10, maxIter
   const tension = new Float64Array(n);
   const load = new Float64Array(n + 1).fill(line.weight * l0);
   load[walkerNode] += line.walkerForce;
-  // Start on a parabola a little longer than the line, so every element starts in tension.
+  // Start on a parabola stretched to the first measured point, so every element starts in tension.
   const chord = Math.hypot(line.span, line.rise);
-  const sag = Math.sqrt(Math.max((3 * line.span * (1.01 * line.length - chord)) / 8, (0.01 * line.span) ** 2));
+  const sag = Math.sqrt(Math.max((3 * line.span * ((1 + line.strains[1]) * line.length - chord)) / 8, (0.001 * line.span) ** 2));
   for (let i = 0; i <= n; i++) {
     const t = i / n;
     x[i] = t * line.span;
