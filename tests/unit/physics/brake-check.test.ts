@@ -1,0 +1,40 @@
+import { describe, expect, it } from "vitest";
+import { checkBrake, type SlipResult } from "../../../physics";
+
+// Invented bench data for an invented device.
+const bench: SlipResult[] = [
+  { device: "Demo cam", ropeDiameterMm: 11, result: "slipped", forceN: 4200 },
+  { device: "Demo cam", ropeDiameterMm: 11, result: "slipped", forceN: 3900 },
+  { device: "Demo cam", ropeDiameterMm: 11, result: "held", forceN: 5000 },
+  { device: "Demo cam", ropeDiameterMm: 10, result: "held", forceN: 3000 },
+];
+
+describe("checkBrake", () => {
+  it("holds with a margin over the lowest measured slip, and states the highest line tension held", () => {
+    const c = checkBrake("Demo cam", 11, bench, 9000, 6);
+    expect(c.verdict).toBe("holds");
+    expect(c.brakeForce).toBe(1500);
+    expect(c.governingLoad).toBe(3900);
+    expect(c.margin).toBeCloseTo(2.6, 12);
+    expect(c.highestLineTensionHeld).toBe(23400);
+  });
+
+  it("slips at or above the lowest slip load, whatever a held-to result says", () => {
+    expect(checkBrake("Demo cam", 11, bench, 3900 * 6, 6).verdict).toBe("slips");
+  });
+
+  it("treats held-to results only as a lower bound, never as a slip load", () => {
+    const within = checkBrake("demo cam ", 10, bench, 12000, 6);
+    expect(within.verdict).toBe("holds");
+    expect(within.lowerBoundOnly).toBe(true);
+    const beyond = checkBrake("Demo cam", 10, bench, 24000, 6);
+    expect(beyond.verdict).toBe("untested");
+  });
+
+  it("is untested for a rope diameter with no results", () => {
+    const c = checkBrake("Demo cam", 12, bench, 9000, 6);
+    expect(c.verdict).toBe("untested");
+    expect(c.margin).toBeNull();
+    expect(c.message).toMatch(/untested/);
+  });
+});
