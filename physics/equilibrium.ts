@@ -17,19 +17,23 @@ export function solveEquilibrium(
   const columns = unknowns.map((name) => VARIABLE_NAMES.indexOf(name));
   const scales = unknowns.map(scaleOf);
   const rowScales = equations.map((eq) => (eq.kind === "tension" ? eq.tension : line.span));
-  const toVariables = (x: number[]): LineVariables => {
+  function toVariables(x: number[]): LineVariables {
     const v = { ...start };
-    unknowns.forEach((name, i) => (v[name] = x[i] * scales[i]));
+    for (let i = 0; i < unknowns.length; i++) v[unknowns[i]] = x[i] * scales[i];
     return v;
-  };
+  }
   const { x, iterations } = newtonSolve(
     {
       evaluate(x) {
         const { residual, jacobian } = lineEquations(line, toVariables(x), equations);
-        return {
-          residual: residual.map((r, i) => r / rowScales[i]),
-          jacobian: jacobian.map((row, i) => columns.map((c, j) => (row[c] * scales[j]) / rowScales[i])),
-        };
+        const scaled: number[][] = [];
+        for (let i = 0; i < residual.length; i++) {
+          residual[i] /= rowScales[i];
+          const row: number[] = [];
+          for (let j = 0; j < columns.length; j++) row.push((jacobian[i][columns[j]] * scales[j]) / rowScales[i]);
+          scaled.push(row);
+        }
+        return { residual, jacobian: scaled };
       },
       isValid(x) {
         const v = toVariables(x);

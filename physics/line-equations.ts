@@ -38,8 +38,8 @@ export function segmentEnds(line: Line, v: LineVariables) {
   const Vm = v.VA + line.weight * v.loadArc;
   const Vp = Vm + v.load;
   const Ve = v.VA + line.weight * v.length + v.load;
-  const at = (V: number) => lineIntegrals(line.curve, v.H, V);
-  return { Vm, Vp, Ve, i0: at(v.VA), im: at(Vm), ip: at(Vp), ie: at(Ve) };
+  const { curve } = line;
+  return { Vm, Vp, Ve, i0: lineIntegrals(curve, v.H, v.VA), im: lineIntegrals(curve, v.H, Vm), ip: lineIntegrals(curve, v.H, Vp), ie: lineIntegrals(curve, v.H, Ve) };
 }
 
 export const VARIABLE_NAMES = ["H", "VA", "loadArc", "load", "length"] as const;
@@ -66,27 +66,21 @@ export function lineEquations(line: Line, v: LineVariables, equations: readonly 
   for (const eq of equations) {
     switch (eq.kind) {
       case "span":
-      case "rise": {
-        const [G, g, dH] = eq.kind === "span" ? (["Gx", "gx", "Hx"] as const) : (["Gy", "gy", "Hy"] as const);
-        const target = eq.kind === "span" ? line.span : line.rise;
-        residual.push((im[G] - i0[G] + ie[G] - ip[G]) / w - target);
-        jacobian.push([
-          (im[dH] - i0[dH] + ie[dH] - ip[dH]) / w,
-          (im[g] - i0[g] + ie[g] - ip[g]) / w,
-          im[g] - ip[g],
-          (ie[g] - ip[g]) / w,
-          ie[g],
-        ]);
+        residual.push((im.Gx - i0.Gx + ie.Gx - ip.Gx) / w - line.span);
+        jacobian.push([(im.Hx - i0.Hx + ie.Hx - ip.Hx) / w, (im.gx - i0.gx + ie.gx - ip.gx) / w, im.gx - ip.gx, (ie.gx - ip.gx) / w, ie.gx]);
         break;
-      }
+      case "rise":
+        residual.push((im.Gy - i0.Gy + ie.Gy - ip.Gy) / w - line.rise);
+        jacobian.push([(im.Hy - i0.Hy + ie.Hy - ip.Hy) / w, (im.gy - i0.gy + ie.gy - ip.gy) / w, im.gy - ip.gy, (ie.gy - ip.gy) / w, ie.gy]);
+        break;
       case "loadX":
-      case "loadY": {
-        const [G, g, dH] = eq.kind === "loadX" ? (["Gx", "gx", "Hx"] as const) : (["Gy", "gy", "Hy"] as const);
-        const target = eq.kind === "loadX" ? eq.x : eq.y;
-        residual.push((im[G] - i0[G]) / w - target);
-        jacobian.push([(im[dH] - i0[dH]) / w, (im[g] - i0[g]) / w, im[g], 0, 0]);
+        residual.push((im.Gx - i0.Gx) / w - eq.x);
+        jacobian.push([(im.Hx - i0.Hx) / w, (im.gx - i0.gx) / w, im.gx, 0, 0]);
         break;
-      }
+      case "loadY":
+        residual.push((im.Gy - i0.Gy) / w - eq.y);
+        jacobian.push([(im.Hy - i0.Hy) / w, (im.gy - i0.gy) / w, im.gy, 0, 0]);
+        break;
       case "tension": {
         if (eq.anchor === "a") {
           const T = Math.hypot(v.H, v.VA);

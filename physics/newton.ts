@@ -29,7 +29,8 @@ export function newtonSolve(system: NewtonSystem, start: number[], options: Newt
     let scale = 1;
     let accepted = false;
     for (let halving = 0; halving < 40; halving++, scale /= 2) {
-      const trial = x.map((xi, i) => xi - scale * step[i]);
+      const trial: number[] = [];
+      for (let i = 0; i < x.length; i++) trial.push(x[i] - scale * step[i]);
       if (!system.isValid(trial)) continue;
       const next = system.evaluate(trial);
       const nextNorm = maxAbs(next.residual);
@@ -60,7 +61,8 @@ function maxAbs(values: number[]): number {
 /** Gaussian elimination with partial pivoting; null if the matrix is singular. */
 function solveLinear(matrix: number[][], rhs: number[]): number[] | null {
   const n = rhs.length;
-  const a = matrix.map((row, i) => [...row, rhs[i]]);
+  const a: number[][] = [];
+  for (let i = 0; i < n; i++) a.push([...matrix[i], rhs[i]]);
   for (let col = 0; col < n; col++) {
     let pivot = col;
     for (let r = col + 1; r < n; r++) if (Math.abs(a[r][col]) > Math.abs(a[pivot][col])) pivot = r;

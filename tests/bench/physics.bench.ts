@@ -1,0 +1,52 @@
+import { readFileSync } from "node:fs";
+import { createStretchCurve, detectSlip, evaluateRig, lengthForPretension, solveLine, STANDARD_GRAVITY, type Line } from "../../physics";
+import { solveManyNodeLine } from "../unit/physics/reference/many-node-line";
+import type { Benchmark, Ratio } from "./benchmark";
+
+// An invented 150 m longline on a four-point stretch curve.
+const points = [
+  { tensionKN: 0, elongationPct: 0 },
+  { tensionKN: 1, elongationPct: 1.5 },
+  { tensionKN: 3, elongationPct: 3.4 },
+  { tensionKN: 6, elongationPct: 5.2 },
+  { tensionKN: 10, elongationPct: 7 },
+];
+const line: Line = { span: 150, rise: 3, weight: 0.05 * STANDARD_GRAVITY, curve: createStretchCurve(points) };
+const mbs = 30000;
+const length = lengthForPretension(line, 4000, "a", mbs).variables.length;
+const walker = 80 * STANDARD_GRAVITY;
+const manyNode = {
+  span: line.span,
+  rise: line.rise,
+  weight: line.weight,
+  length,
+  tensions: points.map((p) => p.tensionKN * 1000),
+  strains: points.map((p) => p.elongationPct / 100),
+  walkerForce: walker,
+  walkerArcFraction: 0.3,
+  elements: 400,
+};
+// The engine solves the same rig at the walker position the many-node model settles to (they agree within 0.2 %).
+const walkerX = solveManyNodeLine(manyNode).walkerX;
+
+const rig = JSON.parse(readFileSync(new URL("../../physics/examples/quarry-highline.json", import.meta.url), "utf8"));
+
+// A slow pull of 1,000,000 samples with noise, slipping at 8 kN.
+const samples = 1_000_000;
+const time = new Float64Array(samples);
+const force = new Float64Array(samples);
+for (let i = 0; i < samples; i++) {
+  time[i] = i * 1e-4;
+  force[i] = i * 0.01 + 5 * Math.sin(i * 0.37) - (i * 0.01 > 8000 ? 500 : 0);
+}
+
+export const benchmarks: Benchmark[] = [
+  { name: "One equilibrium solve, nonlinear curve (150 m, walker at 30 %)", goal: "≤ 20 µs", run: () => solveLine(line, length, { force: walker, x: walkerX }, mbs), batch: 200 },
+  { name: "Full evaluateRig (101-point sweep, leash fall, example rig)", goal: "≤ 5 ms", run: () => evaluateRig(rig), batch: 3 },
+  { name: "Slip detection, 1,000,000-sample trace", goal: "≤ 200 ms", run: () => detectSlip({ time, force }, 200), samples: 9 },
+  { name: "Independent many-node model, same rig (400 elements)", goal: "reference", run: () => solveManyNodeLine(manyNode), samples: 9 },
+];
+
+export const ratios: Ratio[] = [
+  { name: "Engine vs many-node model, same rig, agreement within 0.2 %", goal: "≥ 1000× faster", fast: benchmarks[0].name, slow: benchmarks[3].name },
+];

@@ -1,0 +1,55 @@
+// Runs every *.bench.ts module beside this file and prints a Markdown table of medians.
+import { readdirSync } from "node:fs";
+import { dirname, join } from "node:path";
+import { fileURLToPath, pathToFileURL } from "node:url";
+import type { Benchmark, Ratio } from "./benchmark";
+
+function median(values: number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  const mid = sorted.length >> 1;
+  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+}
+
+/** Median time of one call, in ms. */
+function measure(b: Benchmark): number {
+  const batch = b.batch ?? 1;
+  // Warm up for a quarter of a second so the JIT has compiled the code being timed.
+  const warmUntil = performance.now() + 250;
+  while (performance.now() < warmUntil) b.run();
+  const times: number[] = [];
+  for (let s = 0; s < (b.samples ?? 15); s++) {
+    const start = performance.now();
+    for (let i = 0; i < batch; i++) b.run();
+    times.push((performance.now() - start) / batch);
+  }
+  return median(times);
+}
+
+function formatTime(ms: number): string {
+  if (ms < 1) return `${(ms * 1000).toFixed(1)} µs`;
+  if (ms < 1000) return `${ms.toFixed(2)} ms`;
+  return `${(ms / 1000).toFixed(2)} s`;
+}
+
+async function main() {
+  const here = dirname(fileURLToPath(import.meta.url));
+  const rows: string[] = [];
+  for (const file of readdirSync(here).filter((f) => f.endsWith(".bench.ts")).sort()) {
+    const module: { benchmarks?: Benchmark[]; ratios?: Ratio[] } = await import(pathToFileURL(join(here, file)).href);
+    const medians = new Map<string, number>();
+    for (const b of module.benchmarks ?? []) {
+      const ms = measure(b);
+      medians.set(b.name, ms);
+      rows.push(`| ${b.name} | ${formatTime(ms)} | ${b.goal} |`);
+    }
+    for (const r of module.ratios ?? []) {
+      const ratio = (medians.get(r.slow) ?? NaN) / (medians.get(r.fast) ?? NaN);
+      rows.push(`| ${r.name} | ${ratio.toFixed(0)}× | ${r.goal} |`);
+    }
+  }
+  console.log(`Medians on this machine (Node ${process.version}):\n`);
+  console.log("| Benchmark | Median | Goal |\n| --- | --- | --- |");
+  console.log(rows.join("\n"));
+}
+
+void main();
