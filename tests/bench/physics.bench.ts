@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { createStretchCurve, detectSlip, evaluateRig, lengthForPretension, solveLine, STANDARD_GRAVITY, type Line } from "../../physics";
-import { solveManyNodeLine } from "../unit/physics/reference/many-node-line";
+import { manyNodeLine, solveManyNodeLine } from "../unit/physics/reference/many-node-line";
 import type { Benchmark, Ratio } from "./benchmark";
 
 // An invented 150 m longline on a four-point stretch curve.
@@ -15,17 +15,7 @@ const line: Line = { span: 150, rise: 3, weight: 0.05 * STANDARD_GRAVITY, curve:
 const mbs = 30000;
 const length = lengthForPretension(line, 4000, "a", mbs).variables.length;
 const walker = 80 * STANDARD_GRAVITY;
-const manyNode = {
-  span: line.span,
-  rise: line.rise,
-  weight: line.weight,
-  length,
-  tensions: points.map((p) => p.tensionKN * 1000),
-  strains: points.map((p) => p.elongationPct / 100),
-  walkerForce: walker,
-  walkerArcFraction: 0.3,
-  elements: 400,
-};
+const manyNode = manyNodeLine(line, length, points, walker, 0.3, 400);
 // The engine solves the same rig at the walker position the many-node model settles to (they agree within 0.2 %).
 const walkerX = solveManyNodeLine(manyNode).walkerX;
 

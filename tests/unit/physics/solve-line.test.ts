@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { createStretchCurve, lengthForPretension, RigInputError, sagAt, shortestLength, solveLine, STANDARD_GRAVITY, type Line } from "../../../physics";
 import { demoLine, MBS, relative, STIFF, STRETCHY } from "./fixtures";
-import { solveManyNodeLine } from "./reference/many-node-line";
+import { manyNodeLine, solveManyNodeLine } from "./reference/many-node-line";
 
 /** A linear stretch law ε = T / EA, written as a two-point curve (the last slope carries on). */
 function linearLine(span: number, rise: number, weight: number, EA: number): Line {
@@ -95,17 +95,7 @@ describe("solveLine against an independent many-node model", () => {
           const line = demoLine(c.span, c.rise, c.mass, points);
           const length = lengthForPretension(line, c.pretension, "a", MBS).variables.length;
           const walker = 80 * STANDARD_GRAVITY;
-          const model = solveManyNodeLine({
-            span: c.span,
-            rise: c.rise,
-            weight: line.weight,
-            length,
-            tensions: points.map((p) => p.tensionKN * 1000),
-            strains: points.map((p) => p.elongationPct / 100),
-            walkerForce: walker,
-            walkerArcFraction: fraction,
-            elements: 400,
-          });
+          const model = solveManyNodeLine(manyNodeLine(line, length, [...points], walker, fraction, 400));
           const s = solveLine(line, length, { force: walker, x: model.walkerX }, MBS);
           const modelSag = (c.rise * model.walkerX) / c.span - model.walkerY;
           expect(relative(s.tensionA, model.tensionA)).toBeLessThan(2e-3);

@@ -21,6 +21,28 @@ export interface ManyNodeLine {
   elements: number;
 }
 
+/** The many-node description of a line given as span, rise, weight and measured points (kN, %). */
+export function manyNodeLine(
+  line: { span: number; rise: number; weight: number },
+  length: number,
+  points: { tensionKN: number; elongationPct: number }[],
+  walkerForce: number,
+  walkerArcFraction: number,
+  elements: number,
+): ManyNodeLine {
+  return {
+    span: line.span,
+    rise: line.rise,
+    weight: line.weight,
+    length,
+    tensions: points.map((p) => p.tensionKN * 1000),
+    strains: points.map((p) => p.elongationPct / 100),
+    walkerForce,
+    walkerArcFraction,
+    elements,
+  };
+}
+
 export interface ManyNodeResult {
   tensionA: number;
   tensionB: number;
