@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { ZodError } from "zod";
+import { ZodError, type ZodType } from "zod";
+import { getCurrentSession, type SignedIn } from "./auth/session";
 import { authorize, AccessError, type CrewContext } from "./authz";
 import { RequestError, invalidInput } from "./http-errors";
 import type { Action } from "./roles";
@@ -42,17 +43,37 @@ export async function readJson(request: Request): Promise<unknown> {
   }
 }
 
-type Handler<P> = (context: CrewContext, request: NextRequest, params: P) => Promise<Response>;
+type Segment<P> = { params: Promise<P> };
 
-/** A route handler that works on the caller's crew: origin check, authorization, error mapping. */
-export function crewRoute<P = Record<string, never>>(action: Action, handler: Handler<P>) {
-  return async (request: NextRequest, segment: { params: Promise<P> }) => {
+/** Any route handler: origin check on mutating requests, and every error mapped to a clear answer. */
+export function route<P = Record<string, never>>(handler: (request: NextRequest, params: P) => Promise<Response>) {
+  return async (request: NextRequest, segment: Segment<P>) => {
     try {
       assertSameOrigin(request);
-      const context = await authorize(action);
-      return await handler(context, request, await segment.params);
+      return await handler(request, await segment.params);
     } catch (error) {
       return errorResponse(error);
     }
   };
+}
+
+/** A route handler for a signed-in person, in or out of a crew. */
+export function signedInRoute<P = Record<string, never>>(handler: (signedIn: SignedIn, request: NextRequest, params: P) => Promise<Response>) {
+  return route<P>(async (request, params) => {
+    const signedIn = await getCurrentSession();
+    if (!signedIn) throw new AccessError(401, "Sign in first.");
+    return handler(signedIn, request, params);
+  });
+}
+
+/** A route handler that works on the caller's crew, allowed only to roles the action permits. */
+export function crewRoute<P = Record<string, never>>(action: Action, handler: (context: CrewContext, request: NextRequest, params: P) => Promise<Response>) {
+  return route<P>(async (request, params) => handler(await authorize(action), request, params));
+}
+
+/** Parses a JSON body with a schema; bad JSON or bad fields answer 400 with what is allowed. */
+export async function parseBody<T>(request: Request, schema: ZodType<T>): Promise<T> {
+  const result = schema.safeParse(await readJson(request));
+  if (!result.success) throw invalidInput(result.error);
+  return result.data;
 }

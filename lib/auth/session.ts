@@ -2,6 +2,7 @@ import { cache } from "react";
 import { cookies } from "next/headers";
 import type { Session, User } from "lucia";
 import { lucia } from "./lucia";
+import { recordSessionAgent } from "@/db/users";
 
 export interface SignedIn {
   session: Session;
@@ -28,8 +29,10 @@ export const getCurrentSession = cache(async (): Promise<SignedIn | null> => {
   return session && user ? { session, user } : null;
 });
 
-export async function startSession(userId: string): Promise<void> {
+/** Signs the person in on this device, noting the browser so the account page can list devices. */
+export async function startSession(userId: string, userAgent: string | null): Promise<void> {
   const session = await lucia.createSession(userId, {});
+  await recordSessionAgent(session.id, userAgent);
   const cookie = lucia.createSessionCookie(session.id);
   (await cookies()).set(cookie.name, cookie.value, cookie.attributes);
 }

@@ -1,0 +1,24 @@
+import { NextResponse } from "next/server";
+import { parseBody, route } from "@/lib/api";
+import { AccessError } from "@/lib/authz";
+import { signInSchema } from "@/lib/validations/account";
+import { findUserByEmail } from "@/db/users";
+import { decoyHash, verifyPassword } from "@/lib/auth/passwords";
+import { startSession } from "@/lib/auth/session";
+import { assertSignInAllowed, clearFailedSignIns, clientAddress, recordFailedSignIn } from "@/lib/rate-limit";
+
+// An unknown e-mail and a wrong password get the same answer, in the same time.
+export const POST = route(async (request) => {
+  const { email, password } = await parseBody(request, signInSchema);
+  const address = clientAddress(request);
+  await assertSignInAllowed(email, address);
+  const user = await findUserByEmail(email);
+  const matches = await verifyPassword(user?.password_hash ?? (await decoyHash()), password);
+  if (!user || !matches) {
+    await recordFailedSignIn(email, address);
+    throw new AccessError(401, "That e-mail and password do not match an account.");
+  }
+  await clearFailedSignIns(email);
+  await startSession(user.id, request.headers.get("user-agent"));
+  return NextResponse.json({ user: { name: user.name, email: user.email } });
+});

@@ -1,0 +1,19 @@
+import { NextResponse } from "next/server";
+import { crewRoute, parseBody } from "@/lib/api";
+import { inviteSchema } from "@/lib/validations/crew";
+import { createInvitation, INVITATION_DAYS, openInvitationsOf } from "@/db/invitations";
+import { newToken } from "@/lib/tokens";
+import { sendMail } from "@/lib/mail/transport";
+import { invitationMail } from "@/lib/mail/messages";
+import { appOrigin } from "@/lib/app-origin";
+
+export const GET = crewRoute("crew.invite", async ({ crew }) => NextResponse.json({ invitations: await openInvitationsOf(crew.id) }));
+
+export const POST = crewRoute("crew.invite", async ({ crew, user }, request) => {
+  const { email, role } = await parseBody(request, inviteSchema);
+  const { token, tokenHash } = newToken();
+  const invitation = await createInvitation({ crewId: crew.id, email, role, tokenHash, invitedBy: user.id });
+  const url = `${appOrigin(request)}/invitations/${token}`;
+  await sendMail(invitationMail({ to: email, crewName: crew.name, inviterName: user.name, role, url, days: INVITATION_DAYS }));
+  return NextResponse.json({ invitation }, { status: 201 });
+});

@@ -1,0 +1,28 @@
+import { NextResponse } from "next/server";
+import { crewRoute, parseBody } from "@/lib/api";
+import { AccessError, type CrewContext } from "@/lib/authz";
+import { RequestError } from "@/lib/http-errors";
+import { can } from "@/lib/roles";
+import { changeRoleSchema } from "@/lib/validations/crew";
+import { changeMembership, type MembershipChange } from "@/db/crews";
+
+type Params = { userId: string };
+
+function answer(outcome: MembershipChange, done: object): NextResponse {
+  if (outcome === "not_found") throw new RequestError(404, "Nobody in this crew has that id.");
+  if (outcome === "last_owner") throw new RequestError(409, "The crew must keep at least one owner: make someone else an owner first.");
+  return NextResponse.json(done);
+}
+
+export const PATCH = crewRoute<Params>("crew.roles", async ({ crew }, request, { userId }) => {
+  const { role } = await parseBody(request, changeRoleSchema);
+  return answer(await changeMembership(crew.id, userId, { role }), { userId, role });
+});
+
+// Owners remove anyone; everyone may leave a crew themselves (unless they are its last owner).
+export const DELETE = crewRoute<Params>("crew.read", async (context: CrewContext, _request, { userId }) => {
+  if (userId !== context.user.id && !can(context.role, "crew.roles")) {
+    throw new AccessError(403, `Your role in ${context.crew.name} (${context.role}) may not remove people.`);
+  }
+  return answer(await changeMembership(context.crew.id, userId, "remove"), { removed: userId });
+});

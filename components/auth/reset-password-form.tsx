@@ -1,0 +1,41 @@
+"use client";
+
+import Link from "next/link";
+import { useState } from "react";
+import { PASSWORD_MIN, resetPasswordSchema } from "@/lib/validations/account";
+import { useApiForm } from "@/components/forms/use-api-form";
+import { FormError } from "@/components/forms/form-error";
+import { Field } from "@/components/ui/field";
+import { Button } from "@/components/ui/button";
+
+export function ResetPasswordForm({ token }: { token: string }) {
+  const [done, setDone] = useState<string | null>(null);
+  const { form, submit, formError } = useApiForm(resetPasswordSchema, {
+    url: "/api/auth/reset-password",
+    defaultValues: { token, password: "" },
+    onSuccess: (body) => setDone(String(body.message)),
+  });
+  if (done)
+    return (
+      <p role="status">
+        {done} <Link href="/sign-in">Sign in</Link>
+      </p>
+    );
+  return (
+    <form onSubmit={submit} noValidate className="space-y-4">
+      <FormError message={formError ?? form.formState.errors.token?.message ?? null} />
+      <input type="hidden" {...form.register("token")} />
+      <Field
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint={`At least ${PASSWORD_MIN} characters.`}
+        error={form.formState.errors.password?.message}
+        {...form.register("password")}
+      />
+      <Button type="submit" className="w-full" disabled={form.formState.isSubmitting}>
+        Save the new password
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,42 @@
+"use client";
+
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { PASSWORD_MIN, signUpSchema } from "@/lib/validations/account";
+import { useApiForm } from "@/components/forms/use-api-form";
+import { FormError } from "@/components/forms/form-error";
+import { Field } from "@/components/ui/field";
+import { Button } from "@/components/ui/button";
+
+export function SignUpForm({ next }: { next: string }) {
+  const router = useRouter();
+  const { form, submit, formError } = useApiForm(signUpSchema, {
+    url: "/api/auth/sign-up",
+    onSuccess: () => {
+      router.replace(next);
+      router.refresh();
+    },
+  });
+  const { errors, isSubmitting } = form.formState;
+  return (
+    <form onSubmit={submit} noValidate className="space-y-4">
+      <FormError message={formError} />
+      <Field label="Your name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
+      <Field label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
+      <Field
+        label="Password"
+        type="password"
+        autoComplete="new-password"
+        hint={`At least ${PASSWORD_MIN} characters.`}
+        error={errors.password?.message}
+        {...form.register("password")}
+      />
+      <Button type="submit" className="w-full" disabled={isSubmitting}>
+        Create account
+      </Button>
+      <p className="text-sm">
+        Have an account already? <Link href={`/sign-in?next=${encodeURIComponent(next)}`}>Sign in</Link>
+      </p>
+    </form>
+  );
+}

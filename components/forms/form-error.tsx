@@ -1,0 +1,8 @@
+export function FormError({ message }: { message: string | null }) {
+  if (!message) return null;
+  return (
+    <p role="alert" className="rounded-control border-2 border-danger-600 bg-danger-100 p-3 font-medium text-danger-700">
+      {message}
+    </p>
+  );
+}

@@ -1,0 +1,75 @@
+import { db } from "./knex";
+import type { Role } from "@/lib/roles";
+
+export const INVITATION_DAYS = 7;
+
+export interface Invitation {
+  id: string;
+  crewId: string;
+  crewName: string;
+  email: string;
+  role: Role;
+  createdAt: Date;
+  expiresAt: Date;
+  acceptedAt: Date | null;
+  revokedAt: Date | null;
+}
+
+const columns = {
+  id: "invitations.id",
+  crewId: "invitations.crew_id",
+  crewName: "crews.name",
+  email: "invitations.email",
+  role: "invitations.role",
+  createdAt: "invitations.created_at",
+  expiresAt: "invitations.expires_at",
+  acceptedAt: "invitations.accepted_at",
+  revokedAt: "invitations.revoked_at",
+};
+
+const withCrew = () => db("invitations").join("crews", "crews.id", "invitations.crew_id");
+
+export async function createInvitation(input: { crewId: string; email: string; role: Role; tokenHash: string; invitedBy: string }): Promise<Invitation> {
+  const [{ id }] = await db("invitations")
+    .insert({
+      crew_id: input.crewId,
+      email: input.email,
+      role: input.role,
+      token_hash: input.tokenHash,
+      invited_by: input.invitedBy,
+      expires_at: db.raw(`now() + interval '${INVITATION_DAYS} days'`),
+    })
+    .returning("id");
+  return withCrew().where("invitations.id", id).first(columns);
+}
+
+/** Invitations of the crew not yet accepted or revoked, newest first. */
+export function openInvitationsOf(crewId: string): Promise<Invitation[]> {
+  return withCrew().where("invitations.crew_id", crewId).whereNull("accepted_at").whereNull("revoked_at").orderBy("invitations.created_at", "desc").select(columns);
+}
+
+export async function revokeInvitation(crewId: string, id: string): Promise<boolean> {
+  if (!/^[0-9a-f-]{36}$/i.test(id)) return false;
+  return (await db("invitations").where({ crew_id: crewId, id }).whereNull("accepted_at").whereNull("revoked_at").update({ revoked_at: db.fn.now() })) > 0;
+}
+
+export function invitationByTokenHash(tokenHash: string): Promise<Invitation | undefined> {
+  return withCrew().where("invitations.token_hash", tokenHash).first(columns);
+}
+
+export type AcceptOutcome = "joined" | "unknown" | "expired" | "used" | "revoked" | "wrong_email";
+
+/** Joins the person to the crew once: the row is locked, checked and marked in one transaction. */
+export async function acceptInvitation(tokenHash: string, user: { id: string; email: string }): Promise<{ outcome: AcceptOutcome; crewId?: string }> {
+  return db.transaction(async (trx) => {
+    const row = await trx("invitations").where({ token_hash: tokenHash }).forUpdate().first();
+    if (!row) return { outcome: "unknown" };
+    if (row.revoked_at) return { outcome: "revoked" };
+    if (row.accepted_at) return { outcome: "used" };
+    if (new Date(row.expires_at) <= new Date()) return { outcome: "expired" };
+    if (row.email !== user.email.toLowerCase()) return { outcome: "wrong_email" };
+    await trx("crew_members").insert({ crew_id: row.crew_id, user_id: user.id, role: row.role }).onConflict(["crew_id", "user_id"]).merge({ role: row.role });
+    await trx("invitations").where({ id: row.id }).update({ accepted_at: trx.fn.now(), accepted_by: user.id });
+    return { outcome: "joined", crewId: row.crew_id };
+  });
+}

@@ -1,0 +1,65 @@
+import crypto from "node:crypto";
+import { db } from "./knex";
+
+export interface UserRow {
+  id: string;
+  email: string;
+  name: string;
+  password_hash: string;
+}
+
+export function findUserByEmail(email: string): Promise<UserRow | undefined> {
+  return db<UserRow>("users").where({ email: email.toLowerCase() }).first();
+}
+
+export function findUserById(id: string): Promise<UserRow | undefined> {
+  return db<UserRow>("users").where({ id }).first();
+}
+
+/** Creates the person; null when the e-mail is already taken. */
+export async function createUser(input: { email: string; name: string; passwordHash: string }): Promise<UserRow | null> {
+  const rows = await db<UserRow>("users")
+    .insert({ id: crypto.randomUUID(), email: input.email.toLowerCase(), name: input.name, password_hash: input.passwordHash })
+    .onConflict("email")
+    .ignore()
+    .returning("*");
+  return rows[0] ?? null;
+}
+
+/** Renames and re-addresses the person; false when the new e-mail belongs to someone else. */
+export async function updateProfile(userId: string, input: { name: string; email: string }): Promise<boolean> {
+  const taken = await db("users").where({ email: input.email }).whereNot({ id: userId }).first("id");
+  if (taken) return false;
+  await db("users").where({ id: userId }).update({ name: input.name, email: input.email });
+  return true;
+}
+
+export async function setPasswordHash(userId: string, passwordHash: string): Promise<void> {
+  await db("users").where({ id: userId }).update({ password_hash: passwordHash });
+}
+
+// Pages name a session by a hash of its id: the id itself is the cookie's secret.
+const sessionHandle = "encode(sha256(id::bytea), 'hex')";
+
+export interface SessionRow {
+  handle: string;
+  createdAt: Date;
+  expiresAt: Date;
+  userAgent: string | null;
+}
+
+export function sessionsOf(userId: string): Promise<SessionRow[]> {
+  return db("sessions")
+    .where({ user_id: userId })
+    .where("expires_at", ">", db.fn.now())
+    .orderBy("created_at", "desc")
+    .select({ handle: db.raw(sessionHandle), createdAt: "created_at", expiresAt: "expires_at", userAgent: "user_agent" });
+}
+
+export async function recordSessionAgent(sessionId: string, userAgent: string | null): Promise<void> {
+  await db("sessions").where({ id: sessionId }).update({ user_agent: userAgent?.slice(0, 300) ?? null });
+}
+
+export async function deleteSessionOf(userId: string, handle: string): Promise<boolean> {
+  return (await db("sessions").where({ user_id: userId }).whereRaw(`${sessionHandle} = ?`, [handle]).delete()) > 0;
+}

@@ -1,0 +1,45 @@
+import { z } from "zod";
+
+// One schema per form, imported by the form and by the route handler that receives it.
+export const PASSWORD_MIN = 10;
+
+export const email = z
+  .string({ error: "Enter an e-mail address." })
+  .trim()
+  .toLowerCase()
+  .pipe(z.email({ error: "That is not an e-mail address: use the form name@example.org." }));
+
+export const newPassword = z
+  .string({ error: "Enter a password." })
+  .min(PASSWORD_MIN, { error: `Use at least ${PASSWORD_MIN} characters.` })
+  .max(200, { error: "Use at most 200 characters." });
+
+const personName = z
+  .string({ error: "Enter your name." })
+  .trim()
+  .min(1, { error: "Enter your name." })
+  .max(100, { error: "Use at most 100 characters." });
+
+export const signInSchema = z.object({
+  email,
+  password: z.string({ error: "Enter your password." }).min(1, { error: "Enter your password." }).max(200, { error: "Use at most 200 characters." }),
+});
+
+export const signUpSchema = z.object({ name: personName, email, password: newPassword });
+
+export const forgotPasswordSchema = z.object({ email });
+
+export const resetPasswordSchema = z.object({
+  token: z.string({ error: "The reset link is incomplete." }).min(20, { error: "The reset link is incomplete." }).max(200),
+  password: newPassword,
+});
+
+export const profileSchema = z.object({ name: personName, email });
+
+export const changePasswordSchema = z.object({
+  currentPassword: z.string({ error: "Enter your current password." }).min(1, { error: "Enter your current password." }),
+  newPassword,
+});
+
+export type SignInInput = z.infer<typeof signInSchema>;
+export type SignUpInput = z.infer<typeof signUpSchema>;
