@@ -29,7 +29,7 @@ export class AccessError extends Error {
 }
 
 /** The crew this request works in: the one chosen in the crew cookie, else the person's first. */
-async function currentMembership(userId: string) {
+export async function currentMembership(userId: string) {
   const chosen = (await cookies()).get(CREW_COOKIE)?.value;
   if (chosen) {
     const membership = await membershipIn(userId, chosen);

@@ -1,5 +1,21 @@
 import { AppShell } from "@/components/app-shell";
+import { AccountMenu } from "@/components/account-menu";
+import { CrewSwitcher } from "@/components/crew/crew-switcher";
+import { getCurrentSession } from "@/lib/auth/session";
+import { currentMembership } from "@/lib/authz";
+import { membershipsOf } from "@/db/crews";
 
-export default function AppLayout({ children }: { children: React.ReactNode }) {
-  return <AppShell>{children}</AppShell>;
+// Pages check access themselves; the shell only shows who is signed in and in which crew.
+export default async function AppLayout({ children }: { children: React.ReactNode }) {
+  const signedIn = await getCurrentSession();
+  if (!signedIn) return <AppShell>{children}</AppShell>;
+  const [memberships, current] = await Promise.all([membershipsOf(signedIn.user.id), currentMembership(signedIn.user.id)]);
+  return (
+    <AppShell
+      crewSwitcher={current ? <CrewSwitcher crews={memberships.map((m) => m.crew)} currentId={current.crew.id} /> : null}
+      accountMenu={<AccountMenu name={signedIn.user.name} role={current?.role ?? null} />}
+    >
+      {children}
+    </AppShell>
+  );
 }

@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/forms/form-error";
+import { callApi } from "@/components/forms/call-api";
 
 export function AcceptInvitation({ token, crewName }: { token: string; crewName: string }) {
   const router = useRouter();
@@ -12,14 +13,13 @@ export function AcceptInvitation({ token, crewName }: { token: string; crewName:
   async function accept() {
     setBusy(true);
     setError(null);
-    const response = await fetch("/api/invitations/accept", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ token }) });
-    if (response.ok) {
+    const result = await callApi("POST", "/api/invitations/accept", { token });
+    if (result.ok) {
       router.replace("/crew");
       router.refresh();
       return;
     }
-    const body = await response.json().catch(() => ({}));
-    setError(body.error ?? `The server answered ${response.status}.`);
+    setError(result.error);
     setBusy(false);
   }
   return (

@@ -1,0 +1,62 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { changePasswordSchema, PASSWORD_MIN, profileSchema } from "@/lib/validations/account";
+import { useApiForm } from "@/components/forms/use-api-form";
+import { FormError } from "@/components/forms/form-error";
+import { Field } from "@/components/ui/field";
+import { Button } from "@/components/ui/button";
+import { useToast } from "@/components/ui/toast";
+
+export function ProfileForm({ name, email }: { name: string; email: string }) {
+  const router = useRouter();
+  const notify = useToast();
+  const { form, submit, formError } = useApiForm(profileSchema, {
+    url: "/api/account",
+    method: "PATCH",
+    defaultValues: { name, email },
+    onSuccess: () => {
+      notify({ title: "Profile saved", tone: "ok" });
+      router.refresh();
+    },
+  });
+  return (
+    <form onSubmit={submit} noValidate className="max-w-md space-y-4">
+      <FormError message={formError} />
+      <Field label="Name" autoComplete="name" error={form.formState.errors.name?.message} {...form.register("name")} />
+      <Field label="E-mail" type="email" autoComplete="email" error={form.formState.errors.email?.message} {...form.register("email")} />
+      <Button type="submit" disabled={form.formState.isSubmitting}>
+        Save profile
+      </Button>
+    </form>
+  );
+}
+
+export function PasswordForm() {
+  const notify = useToast();
+  const { form, submit, formError } = useApiForm(changePasswordSchema, {
+    url: "/api/account/password",
+    defaultValues: { currentPassword: "", newPassword: "" },
+    onSuccess: () => {
+      notify({ title: "Password changed", description: "Every other device was signed out.", tone: "ok" });
+      form.reset();
+    },
+  });
+  return (
+    <form onSubmit={submit} noValidate className="max-w-md space-y-4">
+      <FormError message={formError} />
+      <Field label="Current password" type="password" autoComplete="current-password" error={form.formState.errors.currentPassword?.message} {...form.register("currentPassword")} />
+      <Field
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint={`At least ${PASSWORD_MIN} characters.`}
+        error={form.formState.errors.newPassword?.message}
+        {...form.register("newPassword")}
+      />
+      <Button type="submit" disabled={form.formState.isSubmitting}>
+        Change password
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,52 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { Table } from "@/components/ui/table";
+import { Button } from "@/components/ui/button";
+import { useToast } from "@/components/ui/toast";
+import { callApi } from "@/components/forms/call-api";
+
+export interface SessionItem {
+  handle: string;
+  createdAt: string;
+  userAgent: string | null;
+  current: boolean;
+}
+
+const when = (iso: string) => new Date(iso).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" });
+
+export function SessionsList({ sessions }: { sessions: SessionItem[] }) {
+  const router = useRouter();
+  const notify = useToast();
+  async function signOut(method: "POST" | "DELETE", path: string, leaving: boolean) {
+    const result = await callApi(method, path);
+    if (!result.ok) return notify({ title: "Not signed out", description: result.error, tone: "danger" });
+    if (leaving) router.replace("/sign-in");
+    router.refresh();
+  }
+  return (
+    <div className="space-y-4">
+      <Table
+        caption="Devices signed in to your account"
+        rows={sessions}
+        rowKey={(s) => s.handle}
+        columns={[
+          { key: "device", header: "Browser", cell: (s) => <span className="break-all">{s.userAgent ?? "Unknown browser"}{s.current ? " (this device)" : ""}</span> },
+          { key: "since", header: "Signed in", cell: (s) => when(s.createdAt) },
+          {
+            key: "actions",
+            header: "Actions",
+            cell: (s) => (
+              <Button tone="secondary" onClick={() => signOut("DELETE", `/api/account/sessions/${s.handle}`, s.current)}>
+                Sign out
+              </Button>
+            ),
+          },
+        ]}
+      />
+      <Button tone="danger" onClick={() => signOut("POST", "/api/auth/sign-out-everywhere", true)}>
+        Sign out of every device
+      </Button>
+    </div>
+  );
+}

@@ -1,0 +1,99 @@
+import { afterAll, describe, expect, it } from "vitest";
+import { AppClient } from "./support/http";
+import { createCrew, createPerson, FIXTURE_PASSWORD, testDb, type FixtureCrew } from "./support/fixtures";
+import { ROLES, type Role } from "@/lib/roles";
+
+afterAll(() => testDb.destroy());
+
+async function addMember(crewId: string, role: Role = "member") {
+  const person = await createPerson("extra");
+  await testDb("crew_members").insert({ crew_id: crewId, user_id: person.id, role });
+  return person;
+}
+
+const settings = { units: "us", minSafetyFactors: { webbing: 4, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: 3 }, allowSelfSignOff: false };
+
+// Each action, the least role allowed to do it (the table in lib/roles.ts), and how to attempt it.
+const actions: { name: string; least: Role; attempt: (client: AppClient, crew: FixtureCrew) => Promise<Response> }[] = [
+  { name: "list members", least: "member", attempt: (c) => c.get("/api/crew/members") },
+  { name: "read settings", least: "member", attempt: (c) => c.get("/api/crew/settings") },
+  { name: "change settings", least: "lead", attempt: (c) => c.patch("/api/crew/settings", settings) },
+  { name: "list invitations", least: "owner", attempt: (c) => c.get("/api/crew/invitations") },
+  { name: "invite", least: "owner", attempt: (c) => c.post("/api/crew/invitations", { email: `x${Date.now()}@fixture.example`, role: "member" }) },
+  { name: "change a role", least: "owner", attempt: async (c, crew) => c.patch(`/api/crew/members/${(await addMember(crew.id)).id}`, { role: "rigger" }) },
+  { name: "remove someone", least: "owner", attempt: async (c, crew) => c.delete(`/api/crew/members/${(await addMember(crew.id)).id}`) },
+];
+
+describe("who may do what in a crew", async () => {
+  const crew = await createCrew("roles");
+  for (const action of actions) {
+    for (const role of ROLES) {
+      const allowed = ROLES.indexOf(role) >= ROLES.indexOf(action.least);
+      it(`${role} ${allowed ? "may" : "may not"} ${action.name}`, async () => {
+        const client = await AppClient.signedIn(crew.people[role].email, FIXTURE_PASSWORD);
+        const response = await action.attempt(client, crew);
+        if (allowed) expect(response.status).toBeLessThan(300);
+        else expect(response.status).toBe(403);
+      });
+    }
+  }
+
+  it("refuses every crew route to someone not signed in", async () => {
+    for (const path of ["/api/crew/members", "/api/crew/settings", "/api/crew/invitations"]) expect((await new AppClient().get(path)).status).toBe(401);
+  });
+
+  it("refuses settings out of range, naming what is allowed, and keeps the saved ones", async () => {
+    const lead = await AppClient.signedIn(crew.people.lead.email, FIXTURE_PASSWORD);
+    const before = await (await lead.get("/api/crew/settings")).json();
+    const response = await lead.patch("/api/crew/settings", { ...settings, minSafetyFactors: { ...settings.minSafetyFactors, webbing: 0.5 } });
+    expect(response.status).toBe(400);
+    expect((await response.json()).fieldErrors["minSafetyFactors.webbing"]).toMatch(/at least 1.5/);
+    expect(await (await lead.get("/api/crew/settings")).json()).toEqual(before);
+  });
+});
+
+describe("the last owner", () => {
+  it("can neither leave nor be demoted; with a second owner both work", async () => {
+    const crew = await createCrew("owners");
+    const owner = await AppClient.signedIn(crew.people.owner.email, FIXTURE_PASSWORD);
+    const self = `/api/crew/members/${crew.people.owner.id}`;
+    expect((await owner.patch(self, { role: "lead" })).status).toBe(409);
+    expect((await owner.delete(self)).status).toBe(409);
+    expect((await owner.patch(`/api/crew/members/${crew.people.lead.id}`, { role: "owner" })).status).toBe(200);
+    expect((await owner.patch(self, { role: "lead" })).status).toBe(200);
+  });
+
+  it("lets anyone leave a crew themselves", async () => {
+    const crew = await createCrew("leaving");
+    const member = await AppClient.signedIn(crew.people.member.email, FIXTURE_PASSWORD);
+    expect((await member.delete(`/api/crew/members/${crew.people.member.id}`)).status).toBe(200);
+    expect((await member.get("/api/crew/members")).status).toBe(404);
+  });
+});
+
+describe("isolation between crews", () => {
+  it("answers 404 for another crew's people, invitations and the crew itself", async () => {
+    const [mine, theirs] = [await createCrew("mine"), await createCrew("theirs")];
+    const theirOwner = await AppClient.signedIn(theirs.people.owner.email, FIXTURE_PASSWORD);
+    const { invitation } = await (await theirOwner.post("/api/crew/invitations", { email: `t${Date.now()}@fixture.example`, role: "member" })).json();
+    const owner = await AppClient.signedIn(mine.people.owner.email, FIXTURE_PASSWORD);
+    expect((await owner.patch(`/api/crew/members/${theirs.people.member.id}`, { role: "lead" })).status).toBe(404);
+    expect((await owner.delete(`/api/crew/members/${theirs.people.member.id}`)).status).toBe(404);
+    expect((await owner.delete(`/api/crew/invitations/${invitation.id}`)).status).toBe(404);
+    expect((await owner.switchCrew(theirs.id)).status).toBe(404);
+    const listed = await (await owner.get("/api/crew/members")).json();
+    expect(listed.members.map((m: { userId: string }) => m.userId).sort()).toEqual(Object.values(mine.people).map((p) => p.id).sort());
+    const untouched = await testDb("crew_members").where({ crew_id: theirs.id, user_id: theirs.people.member.id }).first();
+    expect(untouched.role).toBe("member");
+  });
+
+  it("lets a person in two crews switch between them", async () => {
+    const [first, second] = [await createCrew("first"), await createCrew("second")];
+    await testDb("crew_members").insert({ crew_id: second.id, user_id: first.people.rigger.id, role: "lead" });
+    const rigger = await AppClient.signedIn(first.people.rigger.email, FIXTURE_PASSWORD);
+    expect((await rigger.switchCrew(second.id)).status).toBe(200);
+    expect((await rigger.patch("/api/crew/settings", settings)).status).toBe(200);
+    expect((await rigger.switchCrew(first.id)).status).toBe(200);
+    expect((await rigger.patch("/api/crew/settings", settings)).status).toBe(403);
+  });
+});

@@ -1,0 +1,24 @@
+import fs from "node:fs/promises";
+import path from "node:path";
+import type { StoredMessage } from "@/lib/mail/mailbox";
+
+/** Waits for the newest message the local SMTP fake kept for this address. */
+export async function latestMailTo(address: string, timeoutMs = 5000): Promise<StoredMessage> {
+  const dir = process.env.DEV_MAILBOX_DIR;
+  if (!dir) throw new Error("DEV_MAILBOX_DIR is not set: run the suites with npm test.");
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const files = (await fs.readdir(dir)).filter((f) => f.endsWith(".json"));
+    const messages = await Promise.all(files.map(async (f) => JSON.parse(await fs.readFile(path.join(dir, f), "utf8")) as StoredMessage));
+    const mine = messages.filter((m) => m.to.includes(address)).sort((a, b) => b.id.localeCompare(a.id));
+    if (mine.length) return mine[0];
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`No e-mail to ${address} arrived within ${timeoutMs} ms.`);
+}
+
+export function linkIn(message: StoredMessage, pathPrefix: string): URL {
+  const match = message.text.match(new RegExp(`https?://\\S+${pathPrefix.replace(/[/?]/g, "\\$&")}\\S+`));
+  if (!match) throw new Error(`No ${pathPrefix} link in "${message.subject}".`);
+  return new URL(match[0]);
+}
