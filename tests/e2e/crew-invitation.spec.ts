@@ -19,7 +19,7 @@ test("sign up, create a crew, invite someone by e-mail, and they join with the r
   await expect(owner.getByRole("heading", { level: 1 })).toHaveText(`Saltmarsh Slack Club ${tag}`);
 
   await owner.getByLabel("E-mail to invite").fill(invitee.email);
-  await owner.getByLabel("Role").selectOption("rigger");
+  await owner.getByLabel("Role", { exact: true }).selectOption("rigger");
   await owner.getByRole("button", { name: "Send invitation" }).click();
   await expect(owner.getByRole("table", { name: "Open invitations" })).toContainText(invitee.email);
   const serious = (await new AxeBuilder({ page: owner }).analyze()).violations.filter((v) => v.impact === "serious" || v.impact === "critical");
