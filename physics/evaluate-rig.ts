@@ -123,7 +123,8 @@ export function evaluateRig(input: unknown): RigResult {
   const walker = solveLine(line, length, { force: walkerLoad, x: walkerX }, mbs);
   const sweep = sweepWalker(line, length, walkerLoad, mbs);
 
-  const fallPeak = leashFallPeak(rig.walker.massKg, fall, lineForceDeflection(line, length, fallX, mbs));
+  const forceDeflection = lineForceDeflection(line, length, fallX, mbs);
+  const fallPeak = leashFallPeak(rig.walker.massKg, fall, forceDeflection.load, forceDeflection.kinkBetween);
   const caught = solveLine(line, length, { force: fallPeak.peakLoad, x: fallX }, mbs);
 
   const peakA = Math.max(sweep.worstTensionA.tensionA, caught.tensionA, unloaded.tensionA);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { leashFallPeak, lengthForPretension, lineForceDeflection, RigInputError, solveLine, STANDARD_GRAVITY } from "../../../physics";
-import { demoLine, MBS, relative, STRETCHY } from "./fixtures";
+import { demoLine, MBS, relative, STIFF, STRETCHY } from "./fixtures";
 
 describe("leashFallPeak", () => {
   it("on a linear spring gives F = mg(1 + √(1 + 2kh/(mg))) (dynamics texts, mass dropped onto a spring) within 0.1 %", () => {
@@ -28,7 +28,7 @@ describe("lineForceDeflection", () => {
   it("is the load whose static solve deflects the line by u below its unloaded shape", () => {
     const line = demoLine(60, 1, 0.06, STRETCHY);
     const length = lengthForPretension(line, 2500, "a", MBS).variables.length;
-    const P = lineForceDeflection(line, length, 20, MBS);
+    const P = lineForceDeflection(line, length, 20, MBS).load;
     const unloaded = solveLine(line, length, { force: 0, x: 20 }, MBS);
     for (const u of [0.3, 1.5, 3]) {
       const loaded = solveLine(line, length, { force: P(u), x: 20 }, MBS);
@@ -36,4 +36,52 @@ describe("lineForceDeflection", () => {
     }
     expect(P(0)).toBe(0);
   });
+});
+
+/**
+ * An independent model written for this test: the same energy balance m·g·(h_f + δ) = ∫₀^δ P du,
+ * with the work summed by the trapezoid rule over 4000 equal steps of P(u) (a dense quadrature, error
+ * near 1e-7 here) and δ interpolated in the step where the balance changes sign.
+ */
+function denseFallPeak(mass: number, fallHeight: number, load: (u: number) => number, upTo: number): { peakLoad: number; deflection: number } {
+  const weight = mass * STANDARD_GRAVITY;
+  const steps = 4000;
+  const h = upTo / steps;
+  let work = 0;
+  let previous = load(0);
+  for (let i = 1; i <= steps; i++) {
+    const current = load(i * h);
+    const nextWork = work + (h * (previous + current)) / 2;
+    const before = work - weight * (fallHeight + (i - 1) * h);
+    const after = nextWork - weight * (fallHeight + i * h);
+    if (before <= 0 && after > 0) {
+      const deflection = (i - 1) * h - (h * before) / (after - before);
+      return { peakLoad: load(deflection), deflection };
+    }
+    work = nextWork;
+    previous = current;
+  }
+  throw new Error("dense reference: no energy balance below the given deflection");
+}
+
+describe("leash fall on a real line against a dense quadrature (independent model written in the test)", () => {
+  const cases = [
+    { name: "25 m park line", span: 25, rise: 0.8, mass: 0.06, pretension: 2000, points: STRETCHY, fraction: 0.5, fall: 2.2 },
+    { name: "25 m park line, stiff curve", span: 25, rise: 0.8, mass: 0.06, pretension: 2000, points: STIFF, fraction: 0.1, fall: 4 },
+    { name: "150 m longline", span: 150, rise: 3, mass: 0.05, pretension: 4000, points: STRETCHY, fraction: 0.3, fall: 2.2 },
+    { name: "500 m highline", span: 500, rise: 10, mass: 0.09, pretension: 6000, points: STIFF, fraction: 0.5, fall: 4 },
+  ];
+  for (const c of cases) {
+    it(`${c.name}, fall at ${c.fraction * 100} %: peak load and deflection within 0.1 %`, () => {
+      const line = demoLine(c.span, c.rise, c.mass, c.points);
+      const length = lengthForPretension(line, c.pretension, "a", MBS).variables.length;
+      const x = c.fraction * c.span;
+      const forceDeflection = lineForceDeflection(line, length, x, MBS);
+      const engine = leashFallPeak(80, c.fall, forceDeflection.load, forceDeflection.kinkBetween);
+      const dense = denseFallPeak(80, c.fall, lineForceDeflection(line, length, x, MBS).load, 1.5 * engine.deflection);
+      expect(relative(engine.peakLoad, dense.peakLoad)).toBeLessThan(1e-3);
+      expect(relative(engine.deflection, dense.deflection)).toBeLessThan(1e-3);
+      expect(relative(engine.energyStored, engine.energyIn)).toBeLessThan(1e-9);
+    });
+  }
 });

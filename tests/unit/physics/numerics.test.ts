@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { bracketedRoot, checkNumber, gaussLegendre, newtonSolve, RigInputError, SolveError } from "../../../physics";
+import { bracketedRoot, checkNumber, GAUSS_LOBATTO_5, newtonSolve, RigInputError, SolveError } from "../../../physics";
 
 describe("bracketedRoot", () => {
   it("finds √2 and refuses an interval without a sign change", () => {
@@ -8,12 +8,12 @@ describe("bracketedRoot", () => {
   });
 });
 
-describe("gaussLegendre", () => {
-  it("integrates polynomials up to degree 2n − 1 exactly (Abramowitz & Stegun 25.4.29)", () => {
-    const { nodes, weights } = gaussLegendre(5);
+describe("GAUSS_LOBATTO_5", () => {
+  it("integrates t^k on [0, 1] to 1/(k + 1) exactly up to degree 7 and not at degree 8 (calculus; degree 2n − 3 for Lobatto)", () => {
+    const { nodes, weights } = GAUSS_LOBATTO_5;
     const integral = (f: (t: number) => number) => nodes.reduce((s, t, i) => s + weights[i] * f(t), 0);
-    expect(integral(() => 1)).toBeCloseTo(1, 14);
-    expect(integral((t) => t ** 9)).toBeCloseTo(1 / 10, 14);
+    for (let k = 0; k <= 7; k++) expect(integral((t) => t ** k)).toBeCloseTo(1 / (k + 1), 14);
+    expect(Math.abs(integral((t) => t ** 8) - 1 / 9)).toBeGreaterThan(1e-6);
   });
 });
 
