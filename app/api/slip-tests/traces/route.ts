@@ -1,0 +1,36 @@
+import { NextResponse } from "next/server";
+import { crewRoute } from "@/lib/api";
+import { RequestError } from "@/lib/http-errors";
+import { putObject } from "@/lib/storage";
+import { analyseTrace } from "@/lib/trace-analysis";
+import { parseTraceCsv } from "@/lib/trace-csv";
+import { checkFileType, randomStorageKey, readUploadForm, sha256Hex } from "@/lib/uploads";
+import { TraceOptionsSchema } from "@/lib/validations/slip-tests";
+import { insertUpload } from "@/db/uploads";
+import { toNewtons } from "@/physics";
+
+/**
+ * Receives a load-cell trace, parses it, runs the engine's slip detection and keeps the file with its
+ * analysis. Nothing is stored unless the whole trace parses: the tester then confirms or corrects the value.
+ */
+export const POST = crewRoute("slip.write", async ({ crew, user }, request) => {
+  const { form, file, bytes } = await readUploadForm(request, "trace");
+  const numberField = (name: string) => {
+    const raw = form.get(name);
+    return typeof raw === "string" && raw.trim() !== "" ? Number(raw.replace(",", ".")) : undefined;
+  };
+  const options = TraceOptionsSchema.parse({ unit: form.get("unit") ?? undefined, drop: numberField("drop") });
+  const contentType = checkFileType("trace", file.name, bytes);
+  let text: string;
+  try {
+    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
+  } catch {
+    throw new RequestError(415, `"${file.name}" is not UTF-8 text: save the trace as a UTF-8 CSV.`);
+  }
+  const analysis = analyseTrace(parseTraceCsv(text, options.unit), options.unit, toNewtons(options.drop, options.unit));
+  const sha256 = sha256Hex(bytes);
+  const storageKey = randomStorageKey();
+  await putObject(storageKey, bytes, contentType, sha256);
+  const upload = await insertUpload(crew.id, { purpose: "trace", storageKey, fileName: file.name, contentType, byteSize: bytes.byteLength, sha256, analysis, uploadedBy: user.id });
+  return NextResponse.json({ upload: { id: upload.id, fileName: upload.fileName, sha256 }, analysis }, { status: 201 });
+});

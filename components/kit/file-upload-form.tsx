@@ -1,0 +1,46 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState, type FormEvent } from "react";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { useToast } from "@/components/ui/toast";
+import { send } from "@/lib/client-requests";
+import { FormError } from "./form-error";
+
+const ACCEPT = { photo: "image/jpeg,image/png,image/webp", manual: "application/pdf" } as const;
+const HINT = { photo: "A JPEG, PNG or WebP image, at most 15 MiB.", manual: "A PDF, at most 30 MiB." } as const;
+
+/** Uploads a photo (of an item or a model) or a manual (of a model). */
+export function FileUploadForm({ purpose, owner }: { purpose: "photo" | "manual"; owner: { itemId: string } | { modelId: string } }) {
+  const router = useRouter();
+  const notify = useToast();
+  const [error, setError] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  async function upload(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const form = event.currentTarget;
+    const data = new FormData(form);
+    if (!(data.get("file") instanceof File) || (data.get("file") as File).size === 0) return setError("Choose a file first.");
+    for (const [key, value] of Object.entries(owner)) data.set(key, value);
+    setBusy(true);
+    setError(null);
+    const answer = await send(`/api/uploads?purpose=${purpose}`, "POST", data);
+    setBusy(false);
+    if (!answer.ok) return setError(answer.error);
+    form.reset();
+    notify({ title: purpose === "photo" ? "Photo added" : "Manual added", tone: "ok" });
+    router.refresh();
+  }
+
+  return (
+    <form onSubmit={upload} className="space-y-3">
+      <Field label={purpose === "photo" ? "Photo" : "Manual (PDF)"} name="file" type="file" accept={ACCEPT[purpose]} hint={HINT[purpose]} className="py-2" />
+      <FormError message={error} />
+      <Button type="submit" tone="secondary" disabled={busy}>
+        {busy ? "Uploading…" : purpose === "photo" ? "Upload photo" : "Upload manual"}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,133 @@
+"use client";
+
+import { useMemo, useState, type ReactNode } from "react";
+import { controlClasses } from "@/components/ui/field";
+import { classNames } from "@/lib/class-names";
+
+export interface SortableColumn<Row> {
+  key: string;
+  header: string;
+  cell: (row: Row) => ReactNode;
+  /** What the column sorts by; a column without it does not sort. */
+  sortBy?: (row: Row) => string | number | null;
+  align?: "left" | "right";
+}
+
+export interface TableFilter<Row> {
+  label: string;
+  options: { value: string; label: string }[];
+  valueOf: (row: Row) => string;
+}
+
+interface SortableTableProps<Row> {
+  caption: string;
+  columns: SortableColumn<Row>[];
+  rows: Row[];
+  rowKey: (row: Row) => string;
+  /** The text a search matches against. */
+  searchText: (row: Row) => string;
+  filters?: TableFilter<Row>[];
+  empty: ReactNode;
+}
+
+const compare = (a: string | number | null, b: string | number | null) => {
+  if (a === null || b === null) return a === b ? 0 : a === null ? 1 : -1;
+  return typeof a === "number" && typeof b === "number" ? a - b : String(a).localeCompare(String(b));
+};
+
+/** A table the reader can search, filter and sort by any sortable column's header. */
+export function SortableTable<Row>({ caption, columns, rows, rowKey, searchText, filters = [], empty }: SortableTableProps<Row>) {
+  const [query, setQuery] = useState("");
+  const [chosen, setChosen] = useState<string[]>(filters.map(() => ""));
+  const [sort, setSort] = useState<{ key: string; descending: boolean } | null>(null);
+
+  const shown = useMemo(() => {
+    const words = query.toLowerCase().split(/\s+/).filter(Boolean);
+    const kept = rows.filter((row) => {
+      const text = searchText(row).toLowerCase();
+      return words.every((w) => text.includes(w)) && filters.every((f, i) => chosen[i] === "" || f.valueOf(row) === chosen[i]);
+    });
+    const column = columns.find((c) => c.key === sort?.key);
+    if (!column?.sortBy || !sort) return kept;
+    const by = column.sortBy;
+    return [...kept].sort((a, b) => compare(by(a), by(b)) * (sort.descending ? -1 : 1));
+  }, [rows, query, chosen, sort, columns, filters, searchText]);
+
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap items-end gap-3">
+        <label className="block min-w-[14rem] flex-1 text-sm font-semibold text-ink-800">
+          Search
+          <input type="search" value={query} onChange={(e) => setQuery(e.target.value)} className={classNames(controlClasses, "mt-1 font-normal")} />
+        </label>
+        {filters.map((f, i) => (
+          <label key={f.label} className="block text-sm font-semibold text-ink-800">
+            {f.label}
+            <select
+              value={chosen[i]}
+              onChange={(e) => setChosen((list) => list.map((v, j) => (j === i ? e.target.value : v)))}
+              className={classNames(controlClasses, "mt-1 pr-8 font-normal")}
+            >
+              <option value="">All</option>
+              {f.options.map((o) => (
+                <option key={o.value} value={o.value}>
+                  {o.label}
+                </option>
+              ))}
+            </select>
+          </label>
+        ))}
+      </div>
+      <p className="text-sm text-ink-500" aria-live="polite">
+        Showing {shown.length} of {rows.length}
+      </p>
+      {shown.length === 0 ? (
+        empty
+      ) : (
+        <div className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel">
+          <table className="min-w-full text-left text-sm">
+            <caption className="sr-only">{caption}</caption>
+            <thead className="bg-ink-100 text-ink-700">
+              <tr>
+                {columns.map((c) => {
+                  const active = sort?.key === c.key;
+                  return (
+                    <th
+                      key={c.key}
+                      scope="col"
+                      aria-sort={active ? (sort.descending ? "descending" : "ascending") : undefined}
+                      className={classNames("px-4 py-2 font-semibold", c.align === "right" && "text-right")}
+                    >
+                      {c.sortBy ? (
+                        <button
+                          type="button"
+                          className="min-h-target font-semibold hover:underline"
+                          onClick={() => setSort({ key: c.key, descending: active ? !sort.descending : false })}
+                        >
+                          {c.header} {active ? (sort.descending ? "▼" : "▲") : ""}
+                        </button>
+                      ) : (
+                        c.header
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            </thead>
+            <tbody className="divide-y divide-ink-100">
+              {shown.map((row) => (
+                <tr key={rowKey(row)}>
+                  {columns.map((c) => (
+                    <td key={c.key} className={classNames("px-4 py-3 align-top", c.align === "right" && "text-right tabular-nums")}>
+                      {c.cell(row)}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+    </div>
+  );
+}

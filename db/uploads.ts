@@ -1,0 +1,71 @@
+import { db } from "./knex";
+import type { UploadPurpose } from "@/lib/uploads";
+
+// Uploaded files' metadata; the bytes are in S3 under storage_key.
+
+export interface UploadRow {
+  id: string;
+  purpose: UploadPurpose;
+  storageKey: string;
+  fileName: string;
+  contentType: string;
+  byteSize: number;
+  sha256: string;
+  modelId: string | null;
+  itemId: string | null;
+  createdAt: string;
+}
+
+export type NewUpload = Omit<UploadRow, "id" | "createdAt" | "modelId" | "itemId"> & {
+  modelId?: string | null;
+  itemId?: string | null;
+  analysis?: unknown;
+  uploadedBy: string;
+};
+
+const columns = [
+  "id",
+  "purpose",
+  db.raw("storage_key as \"storageKey\""),
+  db.raw("file_name as \"fileName\""),
+  db.raw("content_type as \"contentType\""),
+  db.raw("byte_size::float8 as \"byteSize\""),
+  "sha256",
+  db.raw("model_id as \"modelId\""),
+  db.raw("item_id as \"itemId\""),
+  db.raw("created_at as \"createdAt\""),
+];
+
+export async function insertUpload(crewId: string, upload: NewUpload): Promise<UploadRow> {
+  const [{ id }] = await db("uploads")
+    .insert({
+      crew_id: crewId,
+      purpose: upload.purpose,
+      storage_key: upload.storageKey,
+      file_name: upload.fileName,
+      content_type: upload.contentType,
+      byte_size: upload.byteSize,
+      sha256: upload.sha256,
+      model_id: upload.modelId ?? null,
+      item_id: upload.itemId ?? null,
+      analysis: upload.analysis === undefined ? null : JSON.stringify(upload.analysis),
+      uploaded_by: upload.uploadedBy,
+    })
+    .returning("id");
+  return (await findUpload(crewId, id))!;
+}
+
+export async function findUpload(crewId: string, id: string): Promise<UploadRow | null> {
+  return (await db("uploads").where({ crew_id: crewId, id }).first(columns)) ?? null;
+}
+
+/** A trace's stored analysis (what the engine detected and the points the chart draws). */
+export async function traceAnalysis<T>(crewId: string, id: string): Promise<T | null> {
+  const row = await db("uploads").where({ crew_id: crewId, id, purpose: "trace" }).first("analysis");
+  return (row?.analysis as T) ?? null;
+}
+
+export function listUploads(crewId: string, of: { itemId: string } | { modelId: string }): Promise<UploadRow[]> {
+  const where = "itemId" in of ? { item_id: of.itemId } : { model_id: of.modelId };
+  return db("uploads").where({ crew_id: crewId, ...where }).orderBy("created_at", "desc").select(columns);
+}

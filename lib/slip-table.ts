@@ -1,0 +1,74 @@
+import type { SlipResult } from "@/physics";
+
+// The slip table: for each device and rope diameter, what the crew's bench has shown. A held-to result
+// is a lower bound and never counts as a slip load.
+
+export interface SlipTableTest {
+  id: string;
+  deviceId: string;
+  deviceName: string;
+  ropeDiameterMm: number;
+  result: "slipped" | "held";
+  forceN: number;
+}
+
+export interface SlipTableCell {
+  deviceId: string;
+  ropeDiameterMm: number;
+  tests: number;
+  slips: number;
+  /** The lowest slip load, N: the value a brake check relies on. Null when nothing slipped. */
+  lowestSlipN: number | null;
+  /** Highest slip minus lowest slip, N, over two or more slips. */
+  spreadN: number | null;
+  /** The highest held-to force, N: the slip load is at least this when nothing slipped. */
+  highestHeldN: number | null;
+}
+
+export interface SlipTable {
+  devices: { id: string; name: string }[];
+  diameters: number[];
+  cells: SlipTableCell[];
+}
+
+export const cellKey = (deviceId: string, ropeDiameterMm: number) => `${deviceId}@${ropeDiameterMm.toFixed(1)}`;
+
+export function buildSlipTable(tests: readonly SlipTableTest[]): SlipTable {
+  const devices = new Map<string, string>();
+  const cells = new Map<string, SlipTableCell>();
+  for (const test of tests) {
+    devices.set(test.deviceId, test.deviceName);
+    const key = cellKey(test.deviceId, test.ropeDiameterMm);
+    const cell = cells.get(key) ?? { deviceId: test.deviceId, ropeDiameterMm: test.ropeDiameterMm, tests: 0, slips: 0, lowestSlipN: null, spreadN: null, highestHeldN: null };
+    cell.tests++;
+    if (test.result === "slipped") {
+      const highest = cell.lowestSlipN === null ? test.forceN : Math.max(cell.lowestSlipN + (cell.spreadN ?? 0), test.forceN);
+      cell.lowestSlipN = cell.lowestSlipN === null ? test.forceN : Math.min(cell.lowestSlipN, test.forceN);
+      cell.slips++;
+      cell.spreadN = cell.slips > 1 ? highest - cell.lowestSlipN : null;
+    } else {
+      cell.highestHeldN = Math.max(cell.highestHeldN ?? 0, test.forceN);
+    }
+    cells.set(key, cell);
+  }
+  return {
+    devices: [...devices].map(([id, name]) => ({ id, name })).sort((a, b) => a.name.localeCompare(b.name)),
+    diameters: [...new Set(tests.map((t) => t.ropeDiameterMm))].sort((a, b) => a - b),
+    cells: [...cells.values()],
+  };
+}
+
+/** The bench's results in the form the engine's brake check reads. */
+export const toSlipResults = (tests: readonly SlipTableTest[]): SlipResult[] =>
+  tests.map((t) => ({ device: t.deviceName, ropeDiameterMm: t.ropeDiameterMm, result: t.result, forceN: t.forceN }));
+
+/** The table as CSV, one row per cell, forces in kN; held-only cells give their bound, never a slip load. */
+export function slipTableCsv(table: SlipTable): string {
+  const names = new Map(table.devices.map((d) => [d.id, d.name]));
+  const kN = (n: number | null) => (n === null ? "" : (n / 1000).toFixed(2));
+  const quote = (text: string) => `"${text.replace(/"/g, '""')}"`;
+  const rows = [...table.cells]
+    .sort((a, b) => names.get(a.deviceId)!.localeCompare(names.get(b.deviceId)!) || a.ropeDiameterMm - b.ropeDiameterMm)
+    .map((c) => [quote(names.get(c.deviceId)!), c.ropeDiameterMm.toFixed(1), c.tests, c.slips, kN(c.lowestSlipN), kN(c.spreadN), kN(c.highestHeldN)].join(","));
+  return ["device,rope_diameter_mm,tests,slips,lowest_slip_kN,slip_spread_kN,held_to_at_least_kN", ...rows].join("\r\n") + "\r\n";
+}

@@ -1,0 +1,178 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { AppClient } from "./support/http";
+import { createCrew, testDb, type FixtureCrew } from "./support/fixtures";
+import { itemsInService } from "@/db/kit";
+import { db } from "@/db/knex";
+
+// Invented gear of every kind, with specs inside the ranges the schema allows.
+const MODELS = {
+  webbing: { name: "Test tubular 25", specs: { widthMm: 25, massPerMetreG: 45, mbsKN: 30, stretchPoints: [{ tensionKN: 0, elongationPct: 0 }, { tensionKN: 5, elongationPct: 4 }] } },
+  rope: { name: "Test static 11", specs: { diameterMm: 11, construction: "static", mbsKN: 32, massPerMetreG: 80, stretchPoints: [{ tensionKN: 0, elongationPct: 0 }, { tensionKN: 1, elongationPct: 1.2 }] } },
+  brake: { name: "Test cam brake", specs: { minRopeMm: 9, maxRopeMm: 12, mbsKN: 20 } },
+  line_grip: { name: "Test line grip", specs: { minRopeMm: 10, maxRopeMm: 11, mbsKN: 15 } },
+  pulley: { name: "Test pulley 50", specs: { sheaveDiameterMm: 50, efficiency: 0.92, mbsKN: 36 } },
+  connector: { name: "Test shackle", specs: { mbsKN: 45 } },
+  sling: { name: "Test sling 120", specs: { mbsKN: 40 } },
+  other: { name: "Test tree pad", specs: {} },
+} as const;
+
+let crew: FixtureCrew;
+let other: FixtureCrew;
+const as: Record<string, AppClient> = {};
+
+beforeAll(async () => {
+  crew = await createCrew("kit");
+  other = await createCrew("kit-other");
+  for (const role of ["member", "rigger", "lead"] as const) as[role] = await AppClient.signedIn(crew.people[role].email, crew.people[role].password);
+  as.outsider = await AppClient.signedIn(other.people.owner.email, other.people.owner.password);
+});
+
+afterAll(async () => {
+  await testDb.destroy();
+  await db.destroy();
+});
+
+async function createModel(kind: keyof typeof MODELS, client = as.rigger) {
+  const response = await client.post("/api/kit/models", { kind, notes: "", ...MODELS[kind] });
+  return { response, body: await response.json() };
+}
+
+describe("gear models of every kind", () => {
+  for (const kind of Object.keys(MODELS) as (keyof typeof MODELS)[]) {
+    it(`${kind}: a rigger creates it, a lead edits it, a member lists it, a rigger retires it`, async () => {
+      const created = await createModel(kind);
+      expect(created.response.status).toBe(201);
+      expect(created.body.model).toMatchObject({ kind, name: MODELS[kind].name, specs: MODELS[kind].specs, retiredOn: null });
+      const id = created.body.model.id;
+
+      const edited = await as.lead.patch(`/api/kit/models/${id}`, { kind, ...MODELS[kind], name: `${MODELS[kind].name} (edited)`, notes: "checked" });
+      expect(edited.status).toBe(200);
+      expect((await edited.json()).model).toMatchObject({ name: `${MODELS[kind].name} (edited)`, notes: "checked" });
+
+      const listed = await (await as.member.get(`/api/kit/models?kind=${kind}`)).json();
+      expect(listed.models.map((m: { id: string }) => m.id)).toContain(id);
+      expect(listed.models.every((m: { kind: string }) => m.kind === kind)).toBe(true);
+
+      const retired = await as.rigger.post(`/api/kit/models/${id}/retire`, { retiredOn: "2026-11-01", reason: "replaced by a newer model" });
+      expect(retired.status).toBe(200);
+      expect((await retired.json()).model).toMatchObject({ retiredOn: "2026-11-01", retiredReason: "replaced by a newer model" });
+    });
+  }
+
+  it("refuses each kind's bad specs with a message that names the field and the allowed range", async () => {
+    const badWebbing = await as.rigger.post("/api/kit/models", { kind: "webbing", name: "x", specs: { ...MODELS.webbing.specs, widthMm: 2500 } });
+    expect(badWebbing.status).toBe(400);
+    expect((await badWebbing.json()).fieldErrors["specs.widthMm"]).toBe("Width must be at most 60 mm (allowed 10–60 mm).");
+
+    const notFromOrigin = await as.rigger.post("/api/kit/models", {
+      kind: "rope",
+      name: "x",
+      specs: { ...MODELS.rope.specs, stretchPoints: [{ tensionKN: 1, elongationPct: 1 }, { tensionKN: 2, elongationPct: 0.5 }] },
+    });
+    const errors = (await notFromOrigin.json()).fieldErrors;
+    expect(errors["specs.stretchPoints.0.tensionKN"]).toMatch(/origin/);
+    expect(errors["specs.stretchPoints.1.elongationPct"]).toMatch(/must rise/);
+
+    const backwardsRange = await as.rigger.post("/api/kit/models", { kind: "brake", name: "x", specs: { minRopeMm: 12, maxRopeMm: 9, mbsKN: 20 } });
+    expect((await backwardsRange.json()).fieldErrors["specs.maxRopeMm"]).toMatch(/cannot be below/);
+
+    const efficiency = await as.rigger.post("/api/kit/models", { kind: "pulley", name: "x", specs: { sheaveDiameterMm: 50, efficiency: 92, mbsKN: 36 } });
+    expect((await efficiency.json()).fieldErrors["specs.efficiency"]).toMatch(/at most 1/);
+
+    const missing = await as.rigger.post("/api/kit/models", { kind: "sling", name: "x", specs: {} });
+    expect((await missing.json()).fieldErrors["specs.mbsKN"]).toBe("MBS is required (0.5–300 kN).");
+
+    const unknownKind = await as.rigger.post("/api/kit/models", { kind: "hammock", name: "x", specs: {} });
+    expect(unknownKind.status).toBe(400);
+    expect((await unknownKind.json()).error).toMatch(/Choose a kind of gear/);
+
+    const notJson = await as.rigger.request("POST", "/api/kit/models", undefined, { "content-type": "application/json" });
+    expect(notJson.status).toBe(400);
+  });
+
+  it("keeps a model's kind fixed", async () => {
+    const { body } = await createModel("connector");
+    const changed = await as.rigger.patch(`/api/kit/models/${body.model.id}`, { kind: "sling", name: "x", specs: { mbsKN: 20 } });
+    expect(changed.status).toBe(409);
+  });
+});
+
+describe("roles", () => {
+  it("lets members read and refuses them every write", async () => {
+    expect((await as.member.get("/api/kit/models")).status).toBe(200);
+    const { response } = await createModel("sling", as.member);
+    expect(response.status).toBe(403);
+    const { body } = await createModel("sling");
+    expect((await as.member.patch(`/api/kit/models/${body.model.id}`, { kind: "sling", ...MODELS.sling })).status).toBe(403);
+    expect((await as.member.post(`/api/kit/models/${body.model.id}/retire`, { retiredOn: "2026-11-01", reason: "worn out" })).status).toBe(403);
+    expect((await as.member.post("/api/kit/items", { modelId: body.model.id, label: "S-1", inServiceSince: "2026-01-01" })).status).toBe(403);
+  });
+
+  it("answers 401 to someone not signed in", async () => {
+    expect((await new AppClient().get("/api/kit/models")).status).toBe(401);
+  });
+});
+
+describe("isolation between crews", () => {
+  it("answers 404 for another crew's models and items, and never lists them", async () => {
+    const { body } = await createModel("webbing");
+    const item = await (await as.rigger.post("/api/kit/items", { modelId: body.model.id, label: "W-1", inServiceSince: "2026-02-01" })).json();
+    const modelPath = `/api/kit/models/${body.model.id}`;
+    const itemPath = `/api/kit/items/${item.item.id}`;
+    expect((await as.outsider.get(modelPath)).status).toBe(404);
+    expect((await as.outsider.patch(modelPath, { kind: "webbing", ...MODELS.webbing })).status).toBe(404);
+    expect((await as.outsider.post(`${modelPath}/retire`, { retiredOn: "2026-11-01", reason: "not mine" })).status).toBe(404);
+    expect((await as.outsider.get(itemPath)).status).toBe(404);
+    expect((await as.outsider.patch(itemPath, { label: "stolen", inServiceSince: "2026-02-01" })).status).toBe(404);
+    expect((await as.outsider.post(`${itemPath}/inspections`, { inspectedOn: "2026-11-01", result: "pass" })).status).toBe(404);
+    expect((await as.outsider.post("/api/kit/items", { modelId: body.model.id, label: "mine now", inServiceSince: "2026-02-01" })).status).toBe(404);
+    const theirs = await (await as.outsider.get("/api/kit/models")).json();
+    expect(theirs.models).toEqual([]);
+    expect((await (await as.outsider.get("/api/kit/items")).json()).items).toEqual([]);
+    expect((await as.outsider.get("/api/kit/models/not-a-uuid")).status).toBe(404);
+  });
+});
+
+describe("inventory", () => {
+  it("adds, edits, inspects and retires an item; a retired item cannot go into a new plan", async () => {
+    const { body } = await createModel("rope");
+    const created = await as.rigger.post("/api/kit/items", { modelId: body.model.id, label: "R-07", inServiceSince: "2025-05-01", notes: "orange sheath" });
+    expect(created.status).toBe(201);
+    const item = (await created.json()).item;
+    expect(item).toMatchObject({ label: "R-07", modelName: MODELS.rope.name, inServiceSince: "2025-05-01", retiredOn: null });
+
+    const edited = await as.lead.patch(`/api/kit/items/${item.id}`, { label: "R-07b", inServiceSince: "2025-05-02", notes: "" });
+    expect((await edited.json()).item).toMatchObject({ label: "R-07b", inServiceSince: "2025-05-02" });
+
+    const inspected = await as.rigger.post(`/api/kit/items/${item.id}/inspections`, { inspectedOn: "2026-10-01", result: "watch", notes: "glazing near one end" });
+    expect(inspected.status).toBe(201);
+    expect((await inspected.json()).inspection).toMatchObject({ result: "watch", inspectorName: crew.people.rigger.name });
+
+    const detail = await (await as.member.get(`/api/kit/items/${item.id}`)).json();
+    expect(detail.item).toMatchObject({ lastInspectedOn: "2026-10-01", lastResult: "watch" });
+    expect(detail.inspections).toHaveLength(1);
+
+    expect((await itemsInService(crew.id, [item.id])).map((i) => i.id)).toEqual([item.id]);
+    const tooEarly = await as.rigger.post(`/api/kit/items/${item.id}/retire`, { retiredOn: "2025-01-01", reason: "core shot" });
+    expect(tooEarly.status).toBe(400);
+    expect((await tooEarly.json()).fieldErrors.retiredOn).toMatch(/before the item went into service/);
+    const retired = await as.rigger.post(`/api/kit/items/${item.id}/retire`, { retiredOn: "2026-10-02", reason: "core shot" });
+    expect((await retired.json()).item).toMatchObject({ retiredOn: "2026-10-02", retiredReason: "core shot" });
+    expect(await itemsInService(crew.id, [item.id])).toEqual([]);
+    const listed = await (await as.member.get(`/api/kit/items?modelId=${body.model.id}`)).json();
+    expect(listed.items.map((i: { label: string }) => i.label)).toEqual(["R-07b"]);
+  });
+
+  it("refuses new items of a retired model, items in the future and bad inspections", async () => {
+    const { body } = await createModel("pulley");
+    const future = await as.rigger.post("/api/kit/items", { modelId: body.model.id, label: "P-1", inServiceSince: "2999-01-01" });
+    expect((await future.json()).fieldErrors.inServiceSince).toBe("In service since cannot be in the future.");
+    const item = (await (await as.rigger.post("/api/kit/items", { modelId: body.model.id, label: "P-1", inServiceSince: "2026-01-01" })).json()).item;
+    const badResult = await as.rigger.post(`/api/kit/items/${item.id}/inspections`, { inspectedOn: "2026-10-01", result: "fine" });
+    expect((await badResult.json()).fieldErrors.result).toBe("Choose pass, watch or fail.");
+    await as.rigger.post(`/api/kit/models/${body.model.id}/retire`, { retiredOn: "2026-11-01", reason: "recalled" });
+    expect(await itemsInService(crew.id, [item.id])).toEqual([]);
+    const refused = await as.rigger.post("/api/kit/items", { modelId: body.model.id, label: "P-2", inServiceSince: "2026-01-01" });
+    expect(refused.status).toBe(409);
+  });
+});
