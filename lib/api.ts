@@ -3,6 +3,7 @@ import { ZodError, type ZodType } from "zod";
 import { getCurrentSession, type SignedIn } from "./auth/session";
 import { authorize, AccessError, type CrewContext } from "./authz";
 import { RequestError, invalidInput } from "./http-errors";
+import { RigInputError, SolveError } from "@/physics";
 import type { Action } from "./roles";
 
 const MUTATING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
@@ -27,6 +28,8 @@ export function assertSameOrigin(request: Request): void {
 export function errorResponse(error: unknown): NextResponse {
   if (error instanceof ZodError) error = invalidInput(error);
   if (error instanceof AccessError) return NextResponse.json({ error: error.message }, { status: error.status });
+  if (error instanceof RigInputError) return NextResponse.json({ ...error.toJSON(), fieldErrors: { [error.field]: error.message } }, { status: 400 });
+  if (error instanceof SolveError) return NextResponse.json({ ...error.toJSON(), error: `The engine could not solve this rig: ${error.message}. No figures are given rather than unsure ones.` }, { status: 422 });
   if (error instanceof RequestError) {
     return NextResponse.json({ error: error.message, fieldErrors: error.fieldErrors }, { status: error.status, headers: error.headers });
   }

@@ -6,7 +6,8 @@ const founder = { name: "Rhea Kestrel", email: `rhea-${tag}@walkers.example`, pa
 const invitee = { name: "Bram Tallow", email: `bram-${tag}@walkers.example`, password: "anchor-check-22" };
 
 test("sign up, create a crew, invite someone by e-mail, and they join with the right role", async ({ browser }) => {
-  const owner = await browser.newPage();
+  const ownerContext = await browser.newContext();
+  const owner = await ownerContext.newPage();
   await owner.goto("/sign-up");
   await owner.getByLabel("Your name").fill(founder.name);
   await owner.getByLabel("E-mail").fill(founder.email);
@@ -47,4 +48,5 @@ test("sign up, create a crew, invite someone by e-mail, and they join with the r
   await owner.goto("/crew");
   await expect(owner.getByRole("combobox", { name: `Role of ${invitee.name}` })).toHaveValue("rigger");
   await context.close();
+  await ownerContext.close();
 });
