@@ -35,14 +35,14 @@ async function main() {
   const here = dirname(fileURLToPath(import.meta.url));
   const rows: string[] = [];
   for (const file of readdirSync(here).filter((f) => f.endsWith(".bench.ts")).sort()) {
-    const module: { benchmarks?: Benchmark[]; ratios?: Ratio[] } = await import(pathToFileURL(join(here, file)).href);
+    const benchFile: { benchmarks?: Benchmark[]; ratios?: Ratio[] } = await import(pathToFileURL(join(here, file)).href);
     const medians = new Map<string, number>();
-    for (const b of module.benchmarks ?? []) {
+    for (const b of benchFile.benchmarks ?? []) {
       const ms = measure(b);
       medians.set(b.name, ms);
       rows.push(`| ${b.name} | ${formatTime(ms)} | ${b.goal} |`);
     }
-    for (const r of module.ratios ?? []) {
+    for (const r of benchFile.ratios ?? []) {
       const ratio = (medians.get(r.slow) ?? NaN) / (medians.get(r.fast) ?? NaN);
       rows.push(`| ${r.name} | ${ratio.toFixed(0)}× | ${r.goal} |`);
     }
