@@ -3,6 +3,7 @@ import path from "node:path";
 import crypto from "node:crypto";
 import pg from "pg";
 import { aptInstall } from "./apt";
+import { assertPortFree } from "./ports";
 import { StackError } from "./fail";
 import { isRoot, runCaptured } from "./process";
 
@@ -111,6 +112,7 @@ export async function startCluster(projectDir: string, profile: string, port: nu
     }
     return cluster;
   }
+  await assertPortFree(port, "PostgreSQL", profile === "dev" ? "PG_PORT" : "TEST_PG_PORT");
   const logFile = path.join(dataDir, "server.log");
   const start = asServerUser(path.join(bin, "pg_ctl"), [
     "start", "-D", dataDir, "-l", logFile, "-w", "-t", "60",
