@@ -52,7 +52,7 @@ export interface ManyNodeResult {
 }
 
 /** Tension from strain: linear between the points, the last slope beyond, none in compression. */
-function tensionOf(line: ManyNodeLine, strain: number): { tension: number; stiffness: number } {
+export function tensionOf(line: ManyNodeLine, strain: number): { tension: number; stiffness: number } {
   if (strain <= 0) return { tension: 0, stiffness: 0 };
   let k = 0;
   while (k < line.strains.length - 2 && strain > line.strains[k + 1]) k++;
@@ -89,16 +89,16 @@ function solveBand(a: Float64Array[], b: Float64Array): void {
   }
 }
 
-export function solveManyNodeLine(line: ManyNodeLine, tolerance = 1e-8, maxIterations = 200): ManyNodeResult {
+/**
+ * Node positions on a parabola stretched to the first measured point, so every element starts in
+ * tension, and the nodal loads: half of each element's weight at each end, the walker at its node.
+ */
+export function startingShape(line: ManyNodeLine): { x: Float64Array; y: Float64Array; load: Float64Array } {
   const n = line.elements;
-  const l0 = line.length / n;
-  const walkerNode = Math.round(line.walkerArcFraction * n);
   const x = new Float64Array(n + 1);
   const y = new Float64Array(n + 1);
-  const tension = new Float64Array(n);
-  const load = new Float64Array(n + 1).fill(line.weight * l0);
-  load[walkerNode] += line.walkerForce;
-  // Start on a parabola stretched to the first measured point, so every element starts in tension.
+  const load = new Float64Array(n + 1).fill((line.weight * line.length) / n);
+  load[walkerNodeOf(line)] += line.walkerForce;
   const chord = Math.hypot(line.span, line.rise);
   const sag = Math.sqrt(Math.max((3 * line.span * ((1 + line.strains[1]) * line.length - chord)) / 8, (0.001 * line.span) ** 2));
   for (let i = 0; i <= n; i++) {
@@ -106,6 +106,20 @@ export function solveManyNodeLine(line: ManyNodeLine, tolerance = 1e-8, maxItera
     x[i] = t * line.span;
     y[i] = t * line.rise - 4 * sag * t * (1 - t);
   }
+  return { x, y, load };
+}
+
+/** Index of the node that carries the walker. */
+export function walkerNodeOf(line: ManyNodeLine): number {
+  return Math.round(line.walkerArcFraction * line.elements);
+}
+
+export function solveManyNodeLine(line: ManyNodeLine, tolerance = 1e-8, maxIterations = 200): ManyNodeResult {
+  const n = line.elements;
+  const l0 = line.length / n;
+  const walkerNode = walkerNodeOf(line);
+  const { x, y, load } = startingShape(line);
+  const tension = new Float64Array(n);
   const m = 2 * (n - 1);
   const scale = Math.max(line.walkerForce, line.weight * line.length);
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
