@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { createStretchCurve, lengthForPretension, RigInputError, sagAt, shortestLength, solveLine, STANDARD_GRAVITY, type Line } from "../../../physics";
 import { demoLine, MBS, relative, STIFF, STRETCHY } from "./fixtures";
 import { relaxManyNodeLine, RELAXATION_TOLERANCE } from "../../bench/dynamic-relaxation-line";
-import { manyNodeLine, solveManyNodeLine } from "./reference/many-node-line";
+import { manyNodeLine, solveManyNodeLine, type ManyNodeLine } from "./reference/many-node-line";
 
 /** A linear stretch law ε = T / EA, written as a two-point curve (the last slope carries on). */
 function linearLine(span: number, rise: number, weight: number, EA: number): Line {
@@ -83,50 +83,35 @@ describe("solveLine against published closed forms", () => {
   });
 });
 
-describe("solveLine against an independent many-node model", () => {
+describe("solveLine against an independent many-node model (400 elements), solved two ways", () => {
   const cases = [
     { name: "25 m park line", span: 25, rise: 0.8, mass: 0.06, pretension: 2000 },
     { name: "150 m longline", span: 150, rise: 3, mass: 0.05, pretension: 4000 },
     { name: "500 m highline", span: 500, rise: 10, mass: 0.09, pretension: 6000 },
   ];
-  for (const c of cases) {
-    for (const [curveName, points] of [["stretchy", STRETCHY], ["stiff", STIFF]] as const) {
-      for (const fraction of [0.1, 0.5]) {
-        it(`${c.name}, ${curveName} curve, walker at ${fraction * 100} %: anchor tensions and sag within 0.2 %`, () => {
-          const line = demoLine(c.span, c.rise, c.mass, points);
-          const length = lengthForPretension(line, c.pretension, "a", MBS).variables.length;
-          const walker = 80 * STANDARD_GRAVITY;
-          const model = solveManyNodeLine(manyNodeLine(line, length, [...points], walker, fraction, 400));
-          const s = solveLine(line, length, { force: walker, x: model.walkerX }, MBS);
-          const modelSag = (c.rise * model.walkerX) / c.span - model.walkerY;
-          expect(relative(s.tensionA, model.tensionA)).toBeLessThan(2e-3);
-          expect(relative(s.tensionB, model.tensionB)).toBeLessThan(2e-3);
-          expect(relative(s.loadSag, modelSag)).toBeLessThan(2e-3);
-        });
+  // Newton on node positions (tests/unit/physics/reference), and dynamic relaxation run to the
+  // tolerance the bench times it at (tests/bench/dynamic-relaxation-line.ts).
+  const solvers = [
+    { method: "Newton", fractions: [0.1, 0.5], solve: (model: ManyNodeLine) => solveManyNodeLine(model) },
+    { method: "dynamic relaxation", fractions: [0.5], solve: (model: ManyNodeLine) => relaxManyNodeLine(model, RELAXATION_TOLERANCE) },
+  ];
+  for (const { method, fractions, solve } of solvers) {
+    for (const c of cases) {
+      for (const [curveName, points] of [["stretchy", STRETCHY], ["stiff", STIFF]] as const) {
+        for (const fraction of fractions) {
+          it(`${method}: ${c.name}, ${curveName} curve, walker at ${fraction * 100} %: anchor tensions and sag within 0.2 %`, () => {
+            const line = demoLine(c.span, c.rise, c.mass, points);
+            const length = lengthForPretension(line, c.pretension, "a", MBS).variables.length;
+            const walker = 80 * STANDARD_GRAVITY;
+            const model = solve(manyNodeLine(line, length, [...points], walker, fraction, 400));
+            const s = solveLine(line, length, { force: walker, x: model.walkerX }, MBS);
+            const modelSag = (c.rise * model.walkerX) / c.span - model.walkerY;
+            expect(relative(s.tensionA, model.tensionA)).toBeLessThan(2e-3);
+            expect(relative(s.tensionB, model.tensionB)).toBeLessThan(2e-3);
+            expect(relative(s.loadSag, modelSag)).toBeLessThan(2e-3);
+          });
+        }
       }
-    }
-  }
-});
-
-describe("solveLine against the many-node model solved by dynamic relaxation (independent model, tests/bench)", () => {
-  const cases = [
-    { name: "25 m park line", span: 25, rise: 0.8, mass: 0.06, pretension: 2000 },
-    { name: "150 m longline", span: 150, rise: 3, mass: 0.05, pretension: 4000 },
-    { name: "500 m highline", span: 500, rise: 10, mass: 0.09, pretension: 6000 },
-  ];
-  for (const c of cases) {
-    for (const [curveName, points] of [["stretchy", STRETCHY], ["stiff", STIFF]] as const) {
-      it(`${c.name}, ${curveName} curve, walker at 50 %: anchor tensions and sag within 0.2 % at the bench's tolerance`, () => {
-        const line = demoLine(c.span, c.rise, c.mass, points);
-        const length = lengthForPretension(line, c.pretension, "a", MBS).variables.length;
-        const walker = 80 * STANDARD_GRAVITY;
-        const model = relaxManyNodeLine(manyNodeLine(line, length, [...points], walker, 0.5, 400), RELAXATION_TOLERANCE);
-        const s = solveLine(line, length, { force: walker, x: model.walkerX }, MBS);
-        const modelSag = (c.rise * model.walkerX) / c.span - model.walkerY;
-        expect(relative(s.tensionA, model.tensionA)).toBeLessThan(2e-3);
-        expect(relative(s.tensionB, model.tensionB)).toBeLessThan(2e-3);
-        expect(relative(s.loadSag, modelSag)).toBeLessThan(2e-3);
-      });
     }
   }
 });
