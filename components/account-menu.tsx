@@ -13,8 +13,8 @@ export function AccountMenu({ name, role }: { name: string; role: string | null 
     router.refresh();
   }
   return (
-    <div className="flex items-center gap-2 md:flex-col md:items-stretch">
-      <Link href="/account" className="min-h-target content-center text-sm font-semibold text-ink-800">
+    <div className="flex min-w-0 items-center gap-2 md:flex-col md:items-stretch">
+      <Link href="/account" className="min-h-target min-w-0 truncate content-center text-sm font-semibold text-ink-800">
         {name}
         {role ? <span className="ml-1 font-normal text-ink-500">({role})</span> : null}
       </Link>

@@ -20,11 +20,9 @@ export function AppShell({ crewSwitcher, accountMenu, children }: AppShellProps)
           <Link href="/rigs" className="text-xl font-bold text-spruce-800 no-underline hover:no-underline">
             Spanwright
           </Link>
-          <div className="flex items-center gap-2 md:flex-col md:items-stretch">
-            {crewSwitcher}
-            {accountMenu}
-          </div>
+          {accountMenu}
         </div>
+        {crewSwitcher ? <div className="px-4 pb-3">{crewSwitcher}</div> : null}
         <div className="px-2 pb-2 md:px-3">
           <AppNav />
         </div>

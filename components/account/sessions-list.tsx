@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { Table } from "@/components/ui/table";
 import { Button } from "@/components/ui/button";
+import { ConfirmButton } from "@/components/ui/confirm-button";
 import { useToast } from "@/components/ui/toast";
 import { callApi } from "@/components/forms/call-api";
 
@@ -44,9 +45,14 @@ export function SessionsList({ sessions }: { sessions: SessionItem[] }) {
           },
         ]}
       />
-      <Button tone="danger" onClick={() => signOut("POST", "/api/auth/sign-out-everywhere", true)}>
+      <ConfirmButton
+        title="Sign out of every device?"
+        description="Every browser signed in to your account, this one included, will need your password again."
+        confirmLabel="Sign out everywhere"
+        onConfirm={() => signOut("POST", "/api/auth/sign-out-everywhere", true)}
+      >
         Sign out of every device
-      </Button>
+      </ConfirmButton>
     </div>
   );
 }

@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { ROLES, type Role } from "@/lib/roles";
 import { Table } from "@/components/ui/table";
-import { Button } from "@/components/ui/button";
+import { ConfirmButton } from "@/components/ui/confirm-button";
 import { controlClasses } from "@/components/ui/field";
 import { useToast } from "@/components/ui/toast";
 import { callApi } from "@/components/forms/call-api";
@@ -53,13 +53,25 @@ export function MembersTable({ members, selfId, canManage }: { members: MemberRo
           header: "Actions",
           cell: (m) =>
             m.userId === selfId ? (
-              <Button tone="secondary" onClick={() => act("DELETE", m)}>
+              <ConfirmButton
+                tone="secondary"
+                title="Leave this crew?"
+                description="You will no longer see its rigs, kit or slip tests. An owner can invite you again."
+                confirmLabel="Leave crew"
+                onConfirm={() => act("DELETE", m)}
+              >
                 Leave crew
-              </Button>
+              </ConfirmButton>
             ) : canManage ? (
-              <Button tone="danger" onClick={() => act("DELETE", m)} aria-label={`Remove ${m.name}`}>
+              <ConfirmButton
+                ariaLabel={`Remove ${m.name}`}
+                title={`Remove ${m.name}?`}
+                description={`${m.name} will no longer see this crew's rigs, kit or slip tests. An owner can invite them again.`}
+                confirmLabel="Remove"
+                onConfirm={() => act("DELETE", m)}
+              >
                 Remove
-              </Button>
+              </ConfirmButton>
             ) : null,
         },
       ]}

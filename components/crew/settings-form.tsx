@@ -67,7 +67,7 @@ export function CrewSettingsForm({ settings, editable }: { settings: CrewSetting
         </div>
         <label className="flex min-h-target items-center gap-3">
           <input type="checkbox" className="h-6 w-6" {...form.register("allowSelfSignOff")} />
-          <span>A rigger who is also a lead may sign off a plan of their own</span>
+          <span>Whoever drafted a plan may also sign it off, when they are a lead or owner (off: a second person must check it)</span>
         </label>
       </fieldset>
       {editable ? (
