@@ -1,6 +1,6 @@
 // `npm run db:migrate`, `db:rollback [-- --all]`, `db:seed`: against DATABASE_URL when set, or
 // against the local cluster, which this starts for the command and stops again afterwards.
-import { openDatabase } from "./services/migrate";
+import { openDatabase, seedIfEmpty } from "./services/migrate";
 import { databaseUrl, ensureDatabase, startCluster, stopCluster, type PostgresCluster } from "./services/postgres";
 import { projectDir, stackSettings } from "./services/stack";
 import { StackError } from "./services/fail";
@@ -26,8 +26,8 @@ async function run(command: Command, all: boolean): Promise<void> {
       const [batch, names] = await database.migrate.rollback(undefined, all);
       console.log(names.length ? `Rolled back${all ? " every batch" : ` batch ${batch}`}: ${names.join(", ")}` : "Nothing to roll back.");
     } else {
-      const [files] = await database.seed.run();
-      console.log(`Ran seeds: ${files.join(", ")}`);
+      const { seeded } = await seedIfEmpty(database);
+      console.log(seeded ? "Seeded the demo crew." : "The database already has crews: the demo seed only goes into an empty database, so nothing was added.");
     }
   } finally {
     await database.destroy();

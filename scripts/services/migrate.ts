@@ -17,11 +17,16 @@ export async function migrateAndSeed(url: string): Promise<{ seeded: boolean }> 
         `A database migration failed (${(error as Error).message.split("\n")[0]}): nothing past the last good migration was applied; fix the migration, then run the command again.`,
       );
     }
-    const { count } = (await database("crews").count<{ count: string }[]>({ count: "*" }))[0];
-    if (Number(count) > 0) return { seeded: false };
-    await database.seed.run();
-    return { seeded: true };
+    return await seedIfEmpty(database);
   } finally {
     await database.destroy();
   }
+}
+
+/** Runs the demo seeds only into a database that has no crews yet: never over real data. */
+export async function seedIfEmpty(database: Knex): Promise<{ seeded: boolean }> {
+  const { count } = (await database("crews").count<{ count: string }[]>({ count: "*" }))[0];
+  if (Number(count) > 0) return { seeded: false };
+  await database.seed.run();
+  return { seeded: true };
 }
