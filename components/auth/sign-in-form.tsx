@@ -1,21 +1,18 @@
 "use client";
 
 import Link from "next/link";
-import { useRouter } from "next/navigation";
 import { signInSchema } from "@/lib/validations/account";
 import { useApiForm } from "@/components/forms/use-api-form";
+import { useGoTo } from "@/components/forms/use-go-to";
 import { FormError } from "@/components/forms/form-error";
 import { Field } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 
 export function SignInForm({ next }: { next: string }) {
-  const router = useRouter();
+  const goTo = useGoTo(next);
   const { form, submit, formError } = useApiForm(signInSchema, {
     url: "/api/auth/sign-in",
-    onSuccess: () => {
-      router.replace(next);
-      router.refresh();
-    },
+    onSuccess: goTo,
   });
   const { errors, isSubmitting } = form.formState;
   return (

@@ -1,20 +1,17 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import { createCrewSchema } from "@/lib/validations/crew";
 import { useApiForm } from "@/components/forms/use-api-form";
+import { useGoTo } from "@/components/forms/use-go-to";
 import { FormError } from "@/components/forms/form-error";
 import { Field } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 
 export function CreateCrewForm() {
-  const router = useRouter();
+  const goTo = useGoTo("/crew");
   const { form, submit, formError } = useApiForm(createCrewSchema, {
     url: "/api/crews",
-    onSuccess: () => {
-      router.replace("/crew");
-      router.refresh();
-    },
+    onSuccess: goTo,
   });
   return (
     <form onSubmit={submit} noValidate className="max-w-md space-y-4">

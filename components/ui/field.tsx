@@ -33,6 +33,14 @@ export function FieldFrame({ id, label, hint, error, children }: FieldFrameProps
   );
 }
 
+/** The ARIA wiring that ties a control to its error or, failing that, its hint. */
+export function describedBy(id: string, error?: string, hint?: ReactNode) {
+  return {
+    "aria-invalid": error ? true : undefined,
+    "aria-describedby": error ? `${id}-error` : hint ? `${id}-hint` : undefined,
+  } as const;
+}
+
 export interface FieldProps extends InputHTMLAttributes<HTMLInputElement> {
   label: string;
   hint?: ReactNode;
@@ -47,8 +55,7 @@ export const Field = forwardRef<HTMLInputElement, FieldProps>(function Field({ l
       <input
         ref={ref}
         id={fieldId}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${fieldId}-error` : hint ? `${fieldId}-hint` : undefined}
+        {...describedBy(fieldId, error, hint)}
         className={classNames(controlClasses, className)}
         {...props}
       />

@@ -1,6 +1,6 @@
 import { forwardRef, useId, type ReactNode, type SelectHTMLAttributes } from "react";
 import { classNames } from "@/lib/class-names";
-import { FieldFrame, controlClasses } from "./field";
+import { FieldFrame, controlClasses, describedBy } from "./field";
 
 export interface SelectOption {
   value: string;
@@ -23,8 +23,7 @@ export const Select = forwardRef<HTMLSelectElement, SelectProps>(function Select
       <select
         ref={ref}
         id={fieldId}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${fieldId}-error` : hint ? `${fieldId}-hint` : undefined}
+        {...describedBy(fieldId, error, hint)}
         className={classNames(controlClasses, "pr-8", className)}
         {...props}
       >
