@@ -72,3 +72,12 @@ export function slipTableCsv(table: SlipTable): string {
     .map((c) => [quote(names.get(c.deviceId)!), c.ropeDiameterMm.toFixed(1), c.tests, c.slips, kN(c.lowestSlipN), kN(c.spreadN), kN(c.highestHeldN)].join(","));
   return ["device,rope_diameter_mm,tests,slips,lowest_slip_kN,slip_spread_kN,held_to_at_least_kN", ...rows].join("\r\n") + "\r\n";
 }
+
+/**
+ * True when what the tester saved differs from what the engine detected in the trace: another result, or a
+ * force more than 0.5 % (at least 1 N) away, beyond the rounding of a unit conversion.
+ */
+export function isCorrection(detected: { kind: "slipped" | "held"; forceN: number } | null, result: "slipped" | "held", forceN: number): boolean {
+  if (!detected) return false;
+  return detected.kind !== result || Math.abs(detected.forceN - forceN) > Math.max(1, detected.forceN * 0.005);
+}

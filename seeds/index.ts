@@ -1,9 +1,11 @@
 import type { Knex } from "knex";
 import * as demoCrew from "./01_demo_crew";
+import * as demoKitAndSlipBench from "./02_demo_kit_and_slip_bench";
 
 // The demo seeds, in order, imported statically for the same reason as the migration list.
 const seeds: Record<string, Knex.Seed> = {
   "01_demo_crew.ts": demoCrew,
+  "02_demo_kit_and_slip_bench.ts": demoKitAndSlipBench,
 };
 
 export const seedSource: Knex.SeedSource<string> = {

@@ -5,6 +5,7 @@ import { rowId } from "@/lib/validations/ids";
 import { SlipTestSchema } from "@/lib/validations/slip-tests";
 import { SLIP_DEVICE_KINDS } from "@/lib/validations/kit";
 import type { TraceAnalysis } from "@/lib/trace-analysis";
+import { isCorrection } from "@/lib/slip-table";
 import { findModel } from "@/db/kit";
 import { insertSlipTest, listSlipTests } from "@/db/slip-tests";
 import { traceAnalysis } from "@/db/uploads";
@@ -35,8 +36,7 @@ export const POST = crewRoute("slip.write", async ({ crew, user }, request) => {
   if (test.traceUploadId && !analysis) throw fieldError("traceUploadId", "That trace is not in this crew: upload it again.");
   const forceN = toNewtons(test.force, test.forceUnit);
   // A value that differs from what the engine found in the trace is kept, with the tester's reason.
-  const corrected = analysis && (analysis.onset.kind !== test.result || Math.abs(analysis.onset.forceN - forceN) > Math.max(1, analysis.onset.forceN * 0.005));
-  if (corrected && test.notes.trim() === "") {
+  if (isCorrection(analysis?.onset ?? null, test.result, forceN) && test.notes.trim() === "") {
     throw fieldError("notes", "You changed the value detected in the trace: say in the notes why, so the crew can see it was a correction.");
   }
   const saved = await insertSlipTest(crew.id, { ...test, forceN, testedBy: user.id, detected: analysis ? { onset: analysis.onset, engineVersion: analysis.engineVersion } : null });

@@ -1,0 +1,2 @@
+// The section skeleton while this page reads its data.
+export { default } from "@/app/(app)/loading";

@@ -1,0 +1,59 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { FormError } from "@/components/kit/form-error";
+import { send } from "@/lib/client-requests";
+
+/** A lead publishes (or revokes) the read-only link to the crew's slip table. */
+export function PublishLink({ published }: { published: { createdAt: string; createdBy: string } | null }) {
+  const router = useRouter();
+  const [url, setUrl] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+
+  async function publish() {
+    const answer = await send<{ url: string }>("/api/slip-table/link", "POST");
+    if (!answer.ok) return setError(answer.error);
+    setUrl(answer.data.url);
+    router.refresh();
+  }
+
+  async function revoke() {
+    const answer = await send("/api/slip-table/link", "DELETE");
+    if (!answer.ok) return setError(answer.error);
+    setUrl(null);
+    router.refresh();
+  }
+
+  return (
+    <div className="space-y-3">
+      <p className="text-ink-600">
+        Anyone with the link sees this slip table and its chart, read-only; nothing else of the crew. Publishing again makes a new link and stops the old one.
+      </p>
+      {published ? (
+        <p>
+          A link is live: published by {published.createdBy} on {new Date(published.createdAt).toISOString().slice(0, 10)}.
+        </p>
+      ) : (
+        <p>No link is published.</p>
+      )}
+      {url ? (
+        <p className="rounded-control bg-info-100 p-3 text-info-700">
+          Copy the link now; it is shown only once: <code className="break-all">{url}</code>
+        </p>
+      ) : null}
+      <FormError message={error} />
+      <div className="flex flex-wrap gap-2">
+        <Button tone="secondary" onClick={publish}>
+          {published ? "Publish a new link" : "Publish a read-only link"}
+        </Button>
+        {published ? (
+          <Button tone="danger" onClick={revoke}>
+            Revoke the link
+          </Button>
+        ) : null}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,167 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm, type Resolver } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { Button } from "@/components/ui/button";
+import { Field, FieldFrame, controlClasses } from "@/components/ui/field";
+import { Select } from "@/components/ui/select";
+import { useToast } from "@/components/ui/toast";
+import { TraceChart } from "@/components/charts/trace-chart";
+import { FormError } from "@/components/kit/form-error";
+import { asNumber, showServerErrors } from "@/components/kit/server-errors";
+import { send } from "@/lib/client-requests";
+import type { TraceAnalysis } from "@/lib/trace-analysis";
+import { DEFAULT_DROP, FORCE_UNITS, SLIP_RESULTS, SLIP_RESULT_LABELS, SlipTestSchema, type SlipTestInput } from "@/lib/validations/slip-tests";
+import { fromNewtons, type ForceUnit } from "@/physics";
+
+export interface DeviceOption {
+  id: string;
+  name: string;
+}
+export interface RopeOption {
+  id: string;
+  name: string;
+  diameterMm: number;
+}
+
+const unitOptions = FORCE_UNITS.map((u) => ({ value: u, label: u }));
+
+/**
+ * Records a slip test. With a trace, the server reads it and runs the engine's slip detection first;
+ * the detected value fills the result, and the tester confirms it or corrects it (saying why) before saving.
+ */
+export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; ropes: RopeOption[] }) {
+  const router = useRouter();
+  const notify = useToast();
+  const [serverError, setServerError] = useState<string | null>(null);
+  const [traceError, setTraceError] = useState<string | null>(null);
+  const [reading, setReading] = useState(false);
+  const [traceUnit, setTraceUnit] = useState<ForceUnit>("kN");
+  const [analysis, setAnalysis] = useState<TraceAnalysis | null>(null);
+  const { register, handleSubmit, setValue, setError, formState } = useForm<SlipTestInput>({
+    resolver: zodResolver(SlipTestSchema) as unknown as Resolver<SlipTestInput>,
+    defaultValues: { deviceModelId: devices[0]?.id, result: "slipped", forceUnit: "kN", testedOn: new Date().toISOString().slice(0, 10), notes: "" },
+  });
+  const { errors, isSubmitting } = formState;
+
+  async function readTrace(form: HTMLFormElement) {
+    const data = new FormData(form);
+    const file = data.get("file");
+    if (!(file instanceof File) || file.size === 0) return setTraceError("Choose the trace's CSV file first.");
+    setReading(true);
+    setTraceError(null);
+    const answer = await send<{ upload: { id: string }; analysis: TraceAnalysis }>("/api/slip-tests/traces", "POST", data);
+    setReading(false);
+    if (!answer.ok) {
+      setAnalysis(null);
+      setValue("traceUploadId", undefined);
+      return setTraceError(answer.error);
+    }
+    const found = answer.data.analysis;
+    setAnalysis(found);
+    setValue("traceUploadId", answer.data.upload.id);
+    setValue("result", found.onset.kind);
+    setValue("force", Number(fromNewtons(found.onset.forceN, found.unit).toPrecision(4)));
+    setValue("forceUnit", found.unit);
+  }
+
+  const onSubmit = handleSubmit(async (values) => {
+    setServerError(null);
+    const answer = await send("/api/slip-tests", "POST", values);
+    if (!answer.ok) {
+      setServerError(answer.error);
+      showServerErrors(setError, answer.fieldErrors);
+      return;
+    }
+    notify({ title: "Slip test saved", description: "The slip table now includes it.", tone: "ok" });
+    router.push("/slip-bench");
+    router.refresh();
+  });
+
+  return (
+    <div className="max-w-3xl space-y-8">
+      <section aria-labelledby="trace-heading" className="space-y-4 rounded-panel border border-ink-200 bg-white p-4">
+        <h2 id="trace-heading">Load-cell trace (optional)</h2>
+        <p className="text-ink-600">
+          A CSV with a time column (seconds) and a force column; a header row, commas, semicolons or tabs, and decimal commas are all read. At most 64 MiB.
+        </p>
+        <form
+          onSubmit={(event) => {
+            event.preventDefault();
+            void readTrace(event.currentTarget);
+          }}
+          className="grid gap-4 md:grid-cols-3"
+        >
+          <div className="md:col-span-3">
+            <Field label="Trace file (CSV)" name="file" type="file" accept=".csv,.txt,text/csv,text/plain" className="py-2" />
+          </div>
+          <Select label="Force unit of the trace" name="unit" options={unitOptions} value={traceUnit} onChange={(e) => setTraceUnit(e.target.value as ForceUnit)} />
+          <Field
+            key={traceUnit}
+            label={`Drop that counts as a slip (${traceUnit})`}
+            name="drop"
+            inputMode="decimal"
+            defaultValue={DEFAULT_DROP[traceUnit]}
+            hint="A fall this far below the running maximum, while the pull goes on, marks the slip."
+          />
+          <div className="flex items-end">
+            <Button type="submit" tone="secondary" disabled={reading}>
+              {reading ? "Reading the trace…" : "Read trace"}
+            </Button>
+          </div>
+          <div className="md:col-span-3">
+            <FormError message={traceError} />
+          </div>
+        </form>
+        {analysis ? (
+          <div className="space-y-2">
+            <TraceChart time={analysis.chart.time} force={analysis.chart.force} unit={analysis.unit} onset={analysis.onset} />
+            <p>
+              Read {analysis.rows.toLocaleString("en")} rows over {analysis.durationS.toFixed(1)} s (time from “{analysis.timeColumn}”, force from “{analysis.forceColumn}”).{" "}
+              <strong>
+                Detected: {analysis.onset.kind === "slipped" ? "slipped at" : "held to"} {fromNewtons(analysis.onset.forceN, analysis.unit).toPrecision(4)} {analysis.unit}
+              </strong>
+              . Check it against the chart, then confirm it below or correct it and say why in the notes.
+            </p>
+          </div>
+        ) : null}
+      </section>
+
+      <form onSubmit={onSubmit} noValidate className="space-y-5" aria-labelledby="test-heading">
+        <h2 id="test-heading">The test</h2>
+        <div className="grid gap-4 md:grid-cols-2">
+          <Select label="Device tested" options={devices.map((d) => ({ value: d.id, label: d.name }))} error={errors.deviceModelId?.message} {...register("deviceModelId")} />
+          <Select
+            label="Rope (from the Kit)"
+            options={[{ value: "", label: "Not in the Kit" }, ...ropes.map((r) => ({ value: r.id, label: `${r.name} (${r.diameterMm} mm)` }))]}
+            error={errors.ropeModelId?.message}
+            {...register("ropeModelId", {
+              setValueAs: (v) => (v === "" ? undefined : v),
+              onChange: (e) => {
+                const rope = ropes.find((r) => r.id === e.target.value);
+                if (rope) setValue("ropeDiameterMm", rope.diameterMm);
+              },
+            })}
+          />
+          <Field label="Rope diameter (mm)" inputMode="decimal" hint="As measured, to 0.1 mm (3–25 mm)." error={errors.ropeDiameterMm?.message} {...register("ropeDiameterMm", { setValueAs: asNumber })} />
+          <Field label="Tested on" type="date" error={errors.testedOn?.message} {...register("testedOn")} />
+          <Select label="Result" options={SLIP_RESULTS.map((r) => ({ value: r, label: SLIP_RESULT_LABELS[r] }))} error={errors.result?.message} {...register("result")} />
+          <div className="grid grid-cols-[1fr_7rem] gap-2">
+            <Field label="Force" inputMode="decimal" error={errors.force?.message} {...register("force", { setValueAs: asNumber })} />
+            <Select label="Unit" options={unitOptions} error={errors.forceUnit?.message} {...register("forceUnit")} />
+          </div>
+        </div>
+        <FieldFrame id="slip-notes" label="Notes" error={errors.notes?.message}>
+          <textarea id="slip-notes" rows={3} className={`${controlClasses} py-2`} placeholder="Rope condition, pull rate, anything unusual" {...register("notes")} />
+        </FieldFrame>
+        <input type="hidden" {...register("traceUploadId", { setValueAs: (v) => (v === "" ? undefined : v) })} />
+        <FormError message={serverError} />
+        <Button type="submit" disabled={isSubmitting}>
+          {analysis ? "Confirm and save slip test" : "Save slip test"}
+        </Button>
+      </form>
+    </div>
+  );
+}

@@ -1,0 +1,36 @@
+"use client";
+
+import Link from "next/link";
+import { EmptyState } from "@/components/ui/empty-state";
+import { SortableTable } from "@/components/kit/sortable-table";
+import { fromNewtons } from "@/physics";
+import { isCorrection } from "@/lib/slip-table";
+import type { SlipTestRow } from "@/db/slip-tests";
+
+const detectedOf = (t: SlipTestRow) => (t.detectedResult ? { kind: t.detectedResult, forceN: t.detectedForceN! } : null);
+const entered = (t: SlipTestRow) => `${Number(fromNewtons(t.forceN, t.forceUnit).toPrecision(4))} ${t.forceUnit}`;
+
+export function SlipTestList({ tests }: { tests: SlipTestRow[] }) {
+  const devices = [...new Map(tests.map((t) => [t.deviceId, t.deviceName]))].map(([value, label]) => ({ value, label }));
+  return (
+    <SortableTable
+      caption="Slip tests"
+      rows={tests}
+      rowKey={(t) => t.id}
+      searchText={(t) => `${t.deviceName} ${t.ropeModelName ?? ""} ${t.testerName} ${t.notes}`}
+      filters={[
+        { label: "Device", options: devices, valueOf: (t) => t.deviceId },
+        { label: "Result", options: [{ value: "slipped", label: "Slipped" }, { value: "held", label: "Held" }], valueOf: (t) => t.result },
+      ]}
+      empty={<EmptyState title="No slip tests match" />}
+      columns={[
+        { key: "date", header: "Tested on", sortBy: (t) => t.testedOn, cell: (t) => <Link href={`/slip-bench/tests/${t.id}`}>{t.testedOn}</Link> },
+        { key: "device", header: "Device", sortBy: (t) => t.deviceName, cell: (t) => t.deviceName },
+        { key: "rope", header: "Rope", sortBy: (t) => t.ropeDiameterMm, cell: (t) => `${t.ropeDiameterMm.toFixed(1)} mm${t.ropeModelName ? ` (${t.ropeModelName})` : ""}` },
+        { key: "result", header: "Result", sortBy: (t) => t.forceN, align: "right", cell: (t) => `${t.result === "slipped" ? "slipped at" : "held to"} ${entered(t)}` },
+        { key: "trace", header: "Trace", cell: (t) => (t.traceUploadId ? (isCorrection(detectedOf(t), t.result, t.forceN) ? "corrected" : "confirmed") : "—") },
+        { key: "who", header: "Who", sortBy: (t) => t.testerName, cell: (t) => t.testerName },
+      ]}
+    />
+  );
+}

@@ -1,0 +1,126 @@
+import crypto from "node:crypto";
+import type { Knex } from "knex";
+import { DEMO_CREW_NAME } from "./01_demo_crew";
+import { analyseTrace } from "../lib/trace-analysis";
+import { parseTraceCsv } from "../lib/trace-csv";
+import { putObject } from "../lib/storage";
+import { randomStorageKey, sha256Hex } from "../lib/uploads";
+
+// Invented gear for the demo crew (no real makers or models) and invented slip tests, three with
+// synthetic load-cell traces. Every number here is made up for the demo.
+
+const webbingCurve = [
+  { tensionKN: 0, elongationPct: 0 },
+  { tensionKN: 1, elongationPct: 1.6 },
+  { tensionKN: 3, elongationPct: 3.5 },
+  { tensionKN: 6, elongationPct: 5.4 },
+  { tensionKN: 10, elongationPct: 7.3 },
+];
+const ropeCurve = [
+  { tensionKN: 0, elongationPct: 0 },
+  { tensionKN: 1, elongationPct: 0.9 },
+  { tensionKN: 5, elongationPct: 3.1 },
+];
+
+const MODELS = [
+  { key: "ridgeback", kind: "webbing", name: "Ridgeback 25 Tubular", specs: { widthMm: 25, massPerMetreG: 48, mbsKN: 32, stretchPoints: webbingCurve }, notes: "Main longline webbing." },
+  { key: "lumen", kind: "webbing", name: "Lumen Flat 25", specs: { widthMm: 25, massPerMetreG: 39, mbsKN: 28, stretchPoints: webbingCurve.map((p) => ({ ...p, elongationPct: p.elongationPct * 1.2 })) }, notes: "" },
+  { key: "quarry11", kind: "rope", name: "Quarrystatic 11", specs: { diameterMm: 11, construction: "static", mbsKN: 30, massPerMetreG: 78, stretchPoints: ropeCurve }, notes: "Tensioning rope." },
+  { key: "quarry105", kind: "rope", name: "Quarrystatic 10.5", specs: { diameterMm: 10.5, construction: "static", mbsKN: 27, massPerMetreG: 70, stretchPoints: ropeCurve }, notes: "" },
+  { key: "talus", kind: "brake", name: "Talus Cam Brake", specs: { minRopeMm: 9, maxRopeMm: 12, mbsKN: 22 }, notes: "Toothed cam; inspect the teeth before each rig." },
+  { key: "wren", kind: "brake", name: "Wren Smooth Capture", specs: { minRopeMm: 10, maxRopeMm: 11.5, mbsKN: 18 }, notes: "" },
+  { key: "scree", kind: "line_grip", name: "Scree Line Grip", specs: { minRopeMm: 10, maxRopeMm: 12, mbsKN: 15 }, notes: "" },
+  { key: "kestrel", kind: "pulley", name: "Kestrel 50 Pulley", specs: { sheaveDiameterMm: 50, efficiency: 0.93, mbsKN: 36 }, notes: "Ball-bearing sheave." },
+  { key: "shackle", kind: "connector", name: "Greyrock Steel Shackle 12", specs: { mbsKN: 60 }, notes: "" },
+  { key: "spindle", kind: "sling", name: "Spindle Sling 120", specs: { mbsKN: 40 }, notes: "" },
+  { key: "pad", kind: "other", name: "Felt Tree Pad", specs: {}, notes: "Protects bark under anchor slings." },
+] as const;
+
+/** A synthetic slow pull: rising at `rate` N/s with a little noise; past `slipN` the rope creeps through 600 N lower. */
+function syntheticTrace(slipN: number | null, rate: number, seconds: number): string {
+  const lines = ["time_s;force_kN"];
+  let slipped = false;
+  for (let i = 0; i <= seconds * 50; i++) {
+    const t = i / 50;
+    const noise = 15 * Math.sin(i * 0.9);
+    slipped ||= slipN !== null && rate * t >= slipN;
+    const force = slipped ? slipN! - 600 + noise : rate * t + noise;
+    lines.push(`${t.toFixed(2).replace(".", ",")};${(Math.max(force, 0) / 1000).toFixed(4).replace(".", ",")}`);
+  }
+  return lines.join("\n");
+}
+
+export async function seed(knex: Knex): Promise<void> {
+  const crew = await knex("crews").where({ name: DEMO_CREW_NAME }).first("id");
+  if (!crew) return;
+  const tester = await knex("users").where({ email: "sol@greyrock.example" }).first("id");
+  const storeBytes = Boolean(process.env.S3_BUCKET);
+
+  await knex.transaction(async (trx) => {
+    const ids: Record<string, string> = {};
+    for (const m of MODELS) {
+      const [{ id }] = await trx("gear_models").insert({ crew_id: crew.id, kind: m.kind, name: m.name, specs: JSON.stringify(m.specs), notes: m.notes }).returning("id");
+      ids[m.key] = id;
+    }
+    const items = [
+      { model: "ridgeback", label: "RB-01", since: "2025-04-12" },
+      { model: "ridgeback", label: "RB-02", since: "2025-04-12" },
+      { model: "talus", label: "TC-3", since: "2024-09-01" },
+      { model: "kestrel", label: "K50-A", since: "2024-03-20" },
+      { model: "lumen", label: "LF-old", since: "2022-06-01", retiredOn: "2026-08-30", reason: "Edge abrasion after a sharp-rock anchor." },
+    ];
+    for (const item of items) {
+      const [{ id }] = await trx("gear_items")
+        .insert({ crew_id: crew.id, model_id: ids[item.model], label: item.label, in_service_since: item.since, retired_on: item.retiredOn ?? null, retired_reason: item.reason ?? null })
+        .returning("id");
+      await trx("gear_inspections").insert({ crew_id: crew.id, item_id: id, inspected_by: tester.id, inspected_on: "2026-10-04", result: item.retiredOn ? "fail" : "pass", notes: item.retiredOn ? "Cut through the edge fibres." : "" });
+    }
+
+    const tests = [
+      { device: "talus", rope: "quarry105", d: 10.5, result: "slipped", n: 7400, trace: { slipN: 7400, rate: 120, seconds: 80 } },
+      { device: "talus", rope: "quarry105", d: 10.5, result: "slipped", n: 7900 },
+      { device: "talus", rope: "quarry11", d: 11, result: "slipped", n: 8800, trace: { slipN: 8800, rate: 150, seconds: 75 } },
+      { device: "talus", rope: null, d: 10, result: "slipped", n: 6100 },
+      { device: "wren", rope: "quarry11", d: 11, result: "held", n: 9000, trace: { slipN: null, rate: 110, seconds: 82 } },
+      { device: "wren", rope: "quarry105", d: 10.5, result: "slipped", n: 5200 },
+      { device: "scree", rope: "quarry11", d: 11, result: "slipped", n: 4300 },
+    ] as const;
+    for (const test of tests) {
+      let traceUploadId: string | null = null;
+      let detected: { kind: string; forceN: number } | null = null;
+      let engineVersion: string | null = null;
+      if ("trace" in test) {
+        const text = syntheticTrace(test.trace.slipN, test.trace.rate, test.trace.seconds);
+        const bytes = new TextEncoder().encode(text);
+        const analysis = analyseTrace(parseTraceCsv(text, "kN"), "kN", 200);
+        const storageKey = randomStorageKey();
+        const sha256 = sha256Hex(bytes);
+        // Seeding runs before the S3 fake starts; the bytes are stored only when a bucket is configured.
+        if (storeBytes) await putObject(storageKey, bytes, "text/csv", sha256);
+        const [{ id }] = await trx("uploads")
+          .insert({ crew_id: crew.id, purpose: "trace", storage_key: storageKey, file_name: `${test.device}-${test.d}mm-pull.csv`, content_type: "text/csv", byte_size: bytes.byteLength, sha256, analysis: JSON.stringify(analysis), uploaded_by: tester.id })
+          .returning("id");
+        traceUploadId = id;
+        detected = analysis.onset;
+        engineVersion = analysis.engineVersion;
+      }
+      await trx("slip_tests").insert({
+        id: crypto.randomUUID(),
+        crew_id: crew.id,
+        device_model_id: ids[test.device],
+        rope_model_id: test.rope ? ids[test.rope] : null,
+        rope_diameter_mm: test.d,
+        result: test.result,
+        force_n: detected ? detected.forceN : test.n,
+        force_unit: "kN",
+        tested_on: "2026-10-18",
+        tested_by: tester.id,
+        notes: test.result === "held" ? "Stopped the pull at the load cell's working range." : "",
+        trace_upload_id: traceUploadId,
+        detected_result: detected?.kind ?? null,
+        detected_force_n: detected?.forceN ?? null,
+        engine_version: engineVersion,
+      });
+    }
+  });
+}

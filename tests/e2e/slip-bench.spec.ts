@@ -1,0 +1,41 @@
+import { test, expect } from "@playwright/test";
+import { signInAs } from "./support/sign-in";
+
+// An invented slow pull in N: 10 N a sample up to 5000 N, then the rope slips through at 4000 N.
+function pullCsv(): string {
+  const lines = ["time (s),force (N)"];
+  for (let i = 0; i <= 700; i++) lines.push(`${(i * 0.1).toFixed(1)},${i <= 500 ? i * 10 : 4000}`);
+  return lines.join("\n");
+}
+
+test("a tester uploads a trace, sees the chart and the detected onset, confirms it, and the slip table cell changes", async ({ page }) => {
+  await signInAs(page, "rigger", "/slip-bench");
+  const cell = page.locator('[data-cell="Wren Smooth Capture 10.0"]');
+  await expect(cell).toContainText("untested");
+
+  await page.getByRole("link", { name: "Record a slip test" }).click();
+  await expect(page.getByRole("heading", { name: "Record a slip test" })).toBeVisible();
+  await page.getByLabel("Trace file (CSV)").setInputFiles({ name: "wren-10mm.csv", mimeType: "text/csv", buffer: Buffer.from(pullCsv()) });
+  await page.getByLabel("Force unit of the trace").selectOption("N");
+  await page.getByRole("button", { name: "Read trace" }).click();
+
+  const chart = page.getByRole("img", { name: /Trace chart/ });
+  await expect(chart).toBeVisible();
+  await expect(chart).toHaveAccessibleName(/Slip onset 5000 N at 50\.0 s/);
+  await expect(page.getByText("Detected: slipped at 5000 N")).toBeVisible();
+  await expect(page.getByLabel("Force", { exact: true })).toHaveValue("5000");
+  await page.screenshot({ path: ".data/test/playwright/slip-trace-detected.png", fullPage: true });
+
+  await page.getByLabel("Device tested").selectOption({ label: "Wren Smooth Capture" });
+  await page.getByLabel("Rope (from the Kit)").selectOption({ label: "Not in the Kit" });
+  await page.getByLabel("Rope diameter (mm)").fill("10");
+  await page.getByRole("button", { name: "Confirm and save slip test" }).click();
+
+  await expect(page).toHaveURL(/\/slip-bench$/);
+  await expect(cell).toContainText("5.00 kN");
+  await expect(cell).toContainText("1 test");
+  await cell.getByRole("link").click();
+  await expect(page.getByRole("heading", { name: "Tests of Wren Smooth Capture on 10.0 mm" })).toBeVisible();
+  await expect(page.getByRole("table", { name: "Slip tests" })).toContainText("slipped at 5000 N");
+  await page.screenshot({ path: ".data/test/playwright/slip-table-after.png", fullPage: true });
+});
