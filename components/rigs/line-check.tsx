@@ -1,0 +1,55 @@
+"use client";
+
+import { useDeferredValue, useMemo } from "react";
+import { FormProvider, useForm, useWatch } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { evaluateRig, RigInputError, RigInputSchema, SolveError, type RigInput, type RigInputDraft, type RigResult } from "@/physics";
+import type { UnitSystem } from "@/lib/rig-form/quantities";
+import { RigFormSettingsProvider, type EngineFieldError } from "./rig-form-context";
+import { RigInputForm } from "./rig-input-form";
+import { LineResults } from "./line-results";
+import { ServerCheck } from "./server-check";
+
+/** What the browser's engine made of the current input: figures, or the reason there are none. */
+export type Evaluation =
+  | { kind: "figures"; input: unknown; result: RigResult }
+  | { kind: "input"; error: EngineFieldError; message: string }
+  | { kind: "solve"; message: string };
+
+function evaluate(input: unknown): Evaluation {
+  try {
+    return { kind: "figures", input, result: evaluateRig(input) };
+  } catch (error) {
+    if (error instanceof RigInputError) return { kind: "input", error: { field: error.field, allowed: error.allowed }, message: error.message };
+    if (error instanceof SolveError) return { kind: "solve", message: error.message };
+    throw error;
+  }
+}
+
+/**
+ * The line check: the rig's inputs on one side, the engine's figures on the other, recomputed in the
+ * browser on every change; the server confirms them on request and its result is the one of record.
+ */
+export function LineCheck({ startingRig, units }: { startingRig: RigInputDraft; units: UnitSystem }) {
+  const form = useForm<RigInputDraft, unknown, RigInput>({ resolver: zodResolver(RigInputSchema), mode: "onChange", defaultValues: startingRig });
+  const values = useWatch({ control: form.control });
+  // The JSON the server would receive: the browser evaluates exactly that, so both see the same input.
+  const inputJson = useDeferredValue(JSON.stringify(values));
+  const evaluation = useMemo(() => evaluate(JSON.parse(inputJson)), [inputJson]);
+  const engineError = evaluation.kind === "input" ? evaluation.error : null;
+  return (
+    <RigFormSettingsProvider value={{ units, engineError }}>
+      <FormProvider {...form}>
+        <div className="grid gap-6 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
+          <form noValidate onSubmit={(event) => event.preventDefault()} aria-label="Rig inputs">
+            <RigInputForm />
+          </form>
+          <div className="space-y-6">
+            <ServerCheck evaluation={evaluation} />
+            <LineResults evaluation={evaluation} units={units} stale={inputJson !== JSON.stringify(values)} />
+          </div>
+        </div>
+      </FormProvider>
+    </RigFormSettingsProvider>
+  );
+}

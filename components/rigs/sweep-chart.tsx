@@ -1,0 +1,81 @@
+import { formatDepth, formatDistance, formatLoad } from "@/lib/rig-form/format";
+import { toShown, unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
+import type { Sweep, SweepPoint } from "@/physics";
+
+const WIDTH = 640;
+const PANEL = 170;
+const PAD = { left: 64, right: 16, top: 30, bottom: 36 };
+
+interface Series {
+  label: string;
+  value: (p: SweepPoint) => number;
+  dash?: string;
+  worst: SweepPoint;
+  worstText: string;
+}
+
+/** One panel of the chart: lines over the walker's position, the worst point of each marked and named. */
+function SweepPanel({ title, kind, series, sweep, units, offset }: { title: string; kind: "force" | "length"; series: Series[]; sweep: Sweep; units: UnitSystem; offset: number }) {
+  const unit = unitLabel(kind, units);
+  const span = sweep.points[sweep.points.length - 1].x;
+  const values = series.flatMap((s) => sweep.points.map(s.value));
+  const low = Math.min(...values);
+  const high = Math.max(...values);
+  const x = (metres: number) => PAD.left + (metres / span) * (WIDTH - PAD.left - PAD.right);
+  const y = (v: number) => offset + PAD.top + (1 - (v - low) / (high - low || 1)) * (PANEL - PAD.top - PAD.bottom);
+  const bottom = offset + PANEL - PAD.bottom;
+  return (
+    <g>
+      <text x={8} y={offset + 12} className="fill-ink-800 text-[13px] font-semibold">
+        {title} ({unit})
+      </text>
+      <line x1={PAD.left} x2={WIDTH - PAD.right} y1={bottom} y2={bottom} className="stroke-ink-400" />
+      <line x1={PAD.left} x2={PAD.left} y1={offset + PAD.top} y2={bottom} className="stroke-ink-400" />
+      {[low, high].map((v) => (
+        <text key={v} x={PAD.left - 6} y={y(v) + 4} textAnchor="end" className="fill-ink-700 text-[12px] tabular-nums">
+          {toShown(v, kind, units).toFixed(2)}
+        </text>
+      ))}
+      {[0, span / 2, span].map((m) => (
+        <text key={m} x={x(m)} y={bottom + 16} textAnchor="middle" className="fill-ink-700 text-[12px]">
+          {formatDistance(m, units)}
+        </text>
+      ))}
+      {series.map((s) => (
+        <g key={s.label}>
+          <polyline fill="none" strokeWidth={2.5} strokeDasharray={s.dash} className="stroke-spruce-700" points={sweep.points.map((p) => `${x(p.x)},${y(s.value(p))}`).join(" ")} />
+          <circle cx={x(s.worst.x)} cy={y(s.value(s.worst))} r={6} className="fill-danger-600 stroke-white" strokeWidth={2} />
+        </g>
+      ))}
+    </g>
+  );
+}
+
+/** Anchor tensions and walker sag with the walker at every point of the sweep, worst cases marked. */
+export function SweepChart({ sweep, units }: { sweep: Sweep; units: UnitSystem }) {
+  const at = (p: SweepPoint) => formatDistance(p.x, units);
+  const tension: Series[] = [
+    { label: "A", value: (p) => p.tensionA, worst: sweep.worstTensionA, worstText: `Highest at A: ${formatLoad(sweep.worstTensionA.tensionA, units)}, walker at ${at(sweep.worstTensionA)} (solid)` },
+    { label: "B", value: (p) => p.tensionB, dash: "8 5", worst: sweep.worstTensionB, worstText: `Highest at B: ${formatLoad(sweep.worstTensionB.tensionB, units)}, walker at ${at(sweep.worstTensionB)} (dashed)` },
+  ];
+  const sag: Series[] = [{ label: "sag", value: (p) => p.sag, worst: sweep.deepestSag, worstText: `Deepest: ${formatDepth(sweep.deepestSag.sag, units)}, walker at ${at(sweep.deepestSag)}` }];
+  return (
+    <figure>
+      <svg viewBox={`0 0 ${WIDTH} ${PANEL * 2}`} className="h-auto w-full" role="img" aria-labelledby="sweep-chart-title">
+        <title id="sweep-chart-title">
+          {`Walker at ${sweep.points.length} positions from A to B. ${tension.map((s) => s.worstText).join(". ")}. ${sag[0].worstText}.`}
+        </title>
+        <SweepPanel title="Anchor tension" kind="force" series={tension} sweep={sweep} units={units} offset={0} />
+        <SweepPanel title="Walker sag below the chord" kind="length" series={sag} sweep={sweep} units={units} offset={PANEL} />
+      </svg>
+      <figcaption className="mt-2 space-y-1 text-sm text-ink-700">
+        <p>Across: the walker&apos;s distance from A. Red dots mark the worst case of each line:</p>
+        <ul className="list-disc pl-5 font-medium text-ink-900">
+          {[...tension, ...sag].map((s) => (
+            <li key={s.label}>{s.worstText}</li>
+          ))}
+        </ul>
+      </figcaption>
+    </figure>
+  );
+}

@@ -1,0 +1,59 @@
+import { test, expect, type Page } from "@playwright/test";
+import AxeBuilder from "@axe-core/playwright";
+import { signInAs } from "./support/sign-in";
+
+/** The figure shown beside a label in the results. */
+const figure = (page: Page, label: string) => page.locator(`dt:text-is("${label}") + dd`);
+
+test("a rigger checks the worked example, changes it, sees bad input refused beside the field, and the server agrees", async ({ page }) => {
+  await signInAs(page, "rigger", "/rigs/check");
+  await expect(page.getByRole("heading", { name: "Check a line" })).toBeVisible();
+  await expect(page.getByRole("complementary", { name: "Safety cautions" })).toBeVisible();
+
+  // The worked example's figures (physics/README, an invented 120 m quarry highline): walker at mid-span,
+  // tension A 4.39 kN, B 4.41 kN, sag 5.39 m; a bridle leg of 4.22 kN; brake holds, margin 3.18 (shown cut down to 3.17).
+  await expect(figure(page, "Tension at anchor A")).toHaveText(/^4\.[34]\d kN$/);
+  await expect(figure(page, "Tension at anchor B")).toHaveText(/^4\.4\d kN$/);
+  await expect(figure(page, "Walker sag below the chord")).toHaveText(/^5\.[34]\d m$/);
+  await expect(page.getByRole("region", { name: "Brake" })).toContainText("Holds");
+  await expect(figure(page, "Margin (lowest slip ÷ force at the brake)")).toHaveText("3.17");
+  await expect(page.getByText("Leash fall: upper bound, no damping")).toBeVisible();
+  await expect(page.getByRole("table", { name: "Safety factors" })).toContainText("Passes");
+  const before = await figure(page, "Tension at anchor A").textContent();
+
+  // More pretension, more tension at the anchor with the walker on (statics: a tighter line sags less and pulls harder).
+  await page.getByLabel("Pretension, nobody on the line (kN)").fill("5");
+  await expect(figure(page, "Tension at anchor A")).not.toHaveText(before!);
+  expect(parseFloat((await figure(page, "Tension at anchor A").textContent())!)).toBeGreaterThan(parseFloat(before!));
+
+  // A span of 0: the error beside the field says what is allowed, and no figures remain on the page.
+  const span = page.getByLabel("Horizontal span A to B (m)");
+  await span.fill("0");
+  await expect(span).toHaveAttribute("aria-invalid", "true");
+  await expect(span).toHaveAccessibleDescription("Allowed: a horizontal span > 0 m and ≤ 3000 m.");
+  await expect(page.getByRole("heading", { name: "No figures for this input" })).toBeVisible();
+  await expect(figure(page, "Tension at anchor A")).toHaveCount(0);
+  await expect(page.getByRole("button", { name: "Check on the server" })).toBeDisabled();
+
+  // The engine's own limit beyond the schema, beside its field: the pretension must stay below the mainline's MBS (32 kN).
+  await span.fill("120");
+  await page.getByLabel("Pretension, nobody on the line (kN)").fill("40");
+  await expect(page.getByLabel("Pretension, nobody on the line (kN)")).toHaveAccessibleDescription("Allowed: a pretension > 0 kN and below the mainline's MBS, 32 kN.");
+  await expect(figure(page, "Tension at anchor A")).toHaveCount(0);
+
+  await page.getByLabel("Pretension, nobody on the line (kN)").fill("3.5");
+  await expect(figure(page, "Tension at anchor A")).toHaveText(before!);
+  await page.getByRole("button", { name: "Check on the server" }).click();
+  // Exactly, or to within a billionth where the browser's and Node's Math functions round differently in the last bit.
+  await expect(page.getByText(/The server agrees: every figure matches the browser's/)).toBeVisible();
+
+  const serious = (await new AxeBuilder({ page }).analyze()).violations.filter((v) => v.impact === "serious" || v.impact === "critical");
+  expect(serious.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`)).toEqual([]);
+});
+
+test("the Rigs page leads to the line check", async ({ page }) => {
+  await signInAs(page, "member", "/rigs");
+  await page.getByRole("link", { name: "Check a line" }).click();
+  await expect(page).toHaveURL(/\/rigs\/check$/);
+  await expect(figure(page, "Tension at anchor A")).toBeVisible();
+});
