@@ -1,8 +1,8 @@
 import crypto from "node:crypto";
 import { db } from "./knex";
 import type { SlipTest } from "@/lib/validations/slip-tests";
-import type { SlipTableTest } from "@/lib/slip-table";
-import type { ForceUnit, SlipOnset } from "@/physics";
+import { toSlipResults, type SlipTableTest } from "@/lib/slip-table";
+import type { ForceUnit, SlipOnset, SlipResult } from "@/physics";
 
 // Slip tests and the read-only links to a crew's slip table. Every query is scoped by crew id.
 
@@ -55,6 +55,11 @@ export function listSlipTests(crewId: string, filter: SlipTestFilter = {}): Prom
   if (filter.deviceId) query.where("slip_tests.device_model_id", filter.deviceId);
   if (filter.ropeDiameterMm !== undefined) query.where("slip_tests.rope_diameter_mm", filter.ropeDiameterMm);
   return query;
+}
+
+/** The crew's bench results as the engine's brake check reads them: what the planner passes to checkBrake. */
+export async function benchResults(crewId: string): Promise<SlipResult[]> {
+  return toSlipResults(await listSlipTests(crewId));
 }
 
 export async function findSlipTest(crewId: string, id: string): Promise<SlipTestRow | null> {

@@ -1,4 +1,4 @@
-import { GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 
 // File bytes live in S3; the bucket, endpoint and keys come from the environment, so the local fake
 // and a real bucket are the same code.
@@ -33,9 +33,13 @@ export async function putObject(key: string, body: Uint8Array, contentType: stri
   );
 }
 
-/** The object's bytes as a web stream, for answering a download without holding it in memory. */
-export async function getObjectStream(key: string): Promise<ReadableStream> {
-  const answer = await client().send(new GetObjectCommand({ Bucket: setting("S3_BUCKET"), Key: key }));
-  if (!answer.Body) throw new Error(`S3 returned no body for ${key}.`);
-  return answer.Body.transformToWebStream();
+/** The object's bytes as a web stream, for answering a download without holding it in memory; null when the bucket has no such object. */
+export async function getObjectStream(key: string): Promise<ReadableStream | null> {
+  try {
+    const answer = await client().send(new GetObjectCommand({ Bucket: setting("S3_BUCKET"), Key: key }));
+    return answer.Body?.transformToWebStream() ?? null;
+  } catch (error) {
+    if (error instanceof NoSuchKey) return null;
+    throw error;
+  }
 }

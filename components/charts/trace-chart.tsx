@@ -40,7 +40,16 @@ export function TraceChart({ time, force, unit, onset }: TraceChartProps) {
         <path d={path} fill="none" stroke="#1c4e91" strokeWidth="1.5" />
         <line x1={x(onset.timeS)} x2={x(onset.timeS)} y1={M.top} y2={H - M.bottom} stroke="#b42318" strokeDasharray="5 4" strokeWidth="1.5" />
         <circle cx={x(onset.timeS)} cy={y(onsetValue)} r="6" fill={onset.kind === "slipped" ? "#b42318" : "white"} stroke="#b42318" strokeWidth="2" />
-        <text x={Math.min(x(onset.timeS) + 10, W - 230)} y={Math.max(y(onsetValue) - 10, M.top + 12)} fontSize="13" fontWeight="600" fill="#8f1d14">{label}</text>
+        <text
+          x={x(onset.timeS) + (x(onset.timeS) > W / 2 ? -12 : 12)}
+          y={Math.max(y(onsetValue) - 12, M.top + 12)}
+          textAnchor={x(onset.timeS) > W / 2 ? "end" : "start"}
+          fontSize="13"
+          fontWeight="600"
+          fill="#8f1d14"
+        >
+          {label}
+        </text>
       </svg>
       <figcaption className="px-2 pb-1 text-sm text-ink-600">
         {label}. {onset.kind === "held" ? "No drop big enough to count as a slip: the slip load is at least this." : "The first drop beyond the set amount below the running maximum."}

@@ -2,7 +2,7 @@ import type { UploadRow } from "@/db/uploads";
 
 /** Photos as thumbnails and manuals as links, each served only to this crew through /api/uploads. */
 export function FileList({ files }: { files: UploadRow[] }) {
-  if (files.length === 0) return <p className="text-ink-600">No photos or manuals yet.</p>;
+  if (files.length === 0) return <p className="text-ink-600">No files yet.</p>;
   return (
     <ul className="flex flex-wrap gap-4">
       {files.map((f) => (

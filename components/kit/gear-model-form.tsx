@@ -95,7 +95,7 @@ export function GearModelForm({ model }: GearModelFormProps) {
           return (
             <Field
               key={key}
-              label={`${measure.label} (${measure.unit})`}
+              label={measure.unit ? `${measure.label} (${measure.unit})` : `${measure.label} (fraction of 1)`}
               inputMode="decimal"
               hint={`${measure.min}–${measure.max}${key === "mbsKN" ? " — the rated minimum breaking strength, from the maker or a destructive test" : ""}`}
               error={errorAt(errors, `specs.${key}`)}

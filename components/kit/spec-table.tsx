@@ -1,4 +1,4 @@
-import { MEASURES, type GearSpecs, type MeasureKey } from "@/lib/validations/kit";
+import { MEASURES, withUnit, type GearSpecs, type MeasureKey } from "@/lib/validations/kit";
 
 /** A model's specs as a definition list, stretch points as a small table. */
 export function SpecTable({ specs }: { specs: GearSpecs }) {
@@ -35,7 +35,7 @@ export function SpecTable({ specs }: { specs: GearSpecs }) {
         return [
           <dt key={`${key}-t`} className="font-semibold">{measure?.label ?? "Construction"}</dt>,
           <dd key={`${key}-d`} className="tabular-nums">
-            {String(value)} {measure && key !== "efficiency" ? measure.unit : ""}
+            {measure ? withUnit(key as MeasureKey, String(value)) : String(value)}
           </dd>,
         ];
       })}

@@ -31,18 +31,20 @@ export const MEASURES = {
   minRopeMm: { label: "Smallest rope diameter", unit: "mm", min: 3, max: 25 },
   maxRopeMm: { label: "Largest rope diameter", unit: "mm", min: 3, max: 25 },
   sheaveDiameterMm: { label: "Sheave diameter", unit: "mm", min: 10, max: 200 },
-  efficiency: { label: "Efficiency", unit: "fraction, 0.5–1", min: 0.5, max: 1 },
+  efficiency: { label: "Efficiency", unit: "", min: 0.5, max: 1 },
 } as const;
 export type MeasureKey = keyof typeof MEASURES;
 
-const rangeText = (key: MeasureKey) => `${MEASURES[key].min}–${MEASURES[key].max} ${MEASURES[key].unit}`;
+/** "25 mm", or the bare number for a measure without a unit (a pulley's efficiency). */
+export const withUnit = (key: MeasureKey, value: number | string) => `${value}${MEASURES[key].unit ? ` ${MEASURES[key].unit}` : ""}`;
+const rangeText = (key: MeasureKey) => withUnit(key, `${MEASURES[key].min}–${MEASURES[key].max}`);
 
 function measure(key: MeasureKey) {
   const { label, min, max } = MEASURES[key];
   return z
     .number({ error: (issue) => (issue.input === undefined ? `${label} is required (${rangeText(key)}).` : `${label} must be a number (${rangeText(key)}).`) })
-    .min(min, `${label} must be at least ${min} ${MEASURES[key].unit} (allowed ${rangeText(key)}).`)
-    .max(max, `${label} must be at most ${max} ${MEASURES[key].unit} (allowed ${rangeText(key)}).`);
+    .min(min, `${label} must be at least ${withUnit(key, min)} (allowed ${rangeText(key)}).`)
+    .max(max, `${label} must be at most ${withUnit(key, max)} (allowed ${rangeText(key)}).`);
 }
 
 const stretchPoint = z.object({

@@ -2,6 +2,7 @@ import crypto from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { AppClient } from "./support/http";
 import { createCrew, testDb, type FixtureCrew } from "./support/fixtures";
+import { DEMO_PASSWORD, DEMO_PEOPLE } from "@/seeds/01_demo_crew";
 
 let crew: FixtureCrew;
 let other: FixtureCrew;
@@ -184,6 +185,16 @@ describe("roles, isolation and the published link", () => {
     expect((await borrowed.json()).fieldErrors.deviceModelId).toBeDefined();
     const traced = tests.find((t: { traceUploadId: string | null }) => t.traceUploadId);
     expect((await as.outsider.get(`/api/uploads/${traced.traceUploadId}`)).status).toBe(404);
+  });
+
+  it("answers a demo trace whose bytes were never stored with 404 and the reason, never 500", async () => {
+    const demo = await AppClient.signedIn(DEMO_PEOPLE.find((p) => p.role === "rigger")!.email, DEMO_PASSWORD);
+    const { tests } = await (await demo.get("/api/slip-tests")).json();
+    const traced = tests.find((t: { traceUploadId: string | null }) => t.traceUploadId);
+    const response = await demo.get(`/api/uploads/${traced.traceUploadId}`);
+    // The seed stores the bytes only when it runs with a bucket configured.
+    expect([200, 404]).toContain(response.status);
+    if (response.status === 404) expect((await response.json()).error).toMatch(/are not in storage; its recorded analysis is kept/);
   });
 
   it("lets only a lead publish a read-only link that shows the table and nothing else, until revoked", async () => {

@@ -8,8 +8,11 @@ import { findUpload } from "@/db/uploads";
 export const GET = crewRoute<{ id: string }>("kit.read", async ({ crew }, _request, { id }) => {
   const upload = await findUpload(crew.id, rowId(id, "file"));
   if (!upload) throw new RequestError(404, "No such file in this crew.");
+  const body = await getObjectStream(upload.storageKey);
+  // The demo seed's traces keep only their analysis when seeding ran without a bucket.
+  if (!body) throw new RequestError(404, `The bytes of "${upload.fileName}" are not in storage; its recorded analysis is kept. Upload the file again to keep a copy.`);
   const disposition = upload.purpose === "trace" ? "attachment" : "inline";
-  return new Response(await getObjectStream(upload.storageKey), {
+  return new Response(body, {
     headers: {
       "content-type": upload.contentType,
       "content-length": String(upload.byteSize),
