@@ -40,11 +40,15 @@ export function LineCheck({ startingRig, units }: { startingRig: RigInputDraft; 
   return (
     <RigFormSettingsProvider value={{ units, engineError }}>
       <FormProvider {...form}>
-        <div className="grid gap-6 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
-          <form noValidate onSubmit={(event) => event.preventDefault()} aria-label="Rig inputs">
+        <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
+          <form noValidate onSubmit={(event) => event.preventDefault()} aria-label="Rig inputs" className="min-w-0 space-y-4">
+            {/* On a phone the figures come after a long form. */}
+            <a href="#figures" className="flex min-h-target items-center font-semibold lg:hidden">
+              Go to the figures ↓
+            </a>
             <RigInputForm />
           </form>
-          <div className="space-y-6">
+          <div id="figures" className="min-w-0 scroll-mt-4 space-y-6">
             <ServerCheck evaluation={evaluation} />
             <LineResults evaluation={evaluation} units={units} stale={inputJson !== JSON.stringify(values)} />
           </div>

@@ -2,11 +2,11 @@
 
 import type { ReactNode } from "react";
 import dynamic from "next/dynamic";
-import { Table } from "@/components/ui/table";
 import { formatCapacity, formatDepth, formatDistance, formatLoad, truncateRatio } from "@/lib/rig-form/format";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { RigResult, SafetyFactor } from "@/physics";
 import type { Evaluation } from "./line-check";
+import { KeyboardScrollTable } from "./keyboard-scroll-table";
 import { SweepChart } from "./sweep-chart";
 import { Verdict, type VerdictTone } from "./verdict";
 
@@ -51,7 +51,7 @@ const where = (f: SafetyFactor) => (f.location === "line" ? "Line" : `Anchor ${f
 
 function SafetyFactorTable({ factors, units }: { factors: SafetyFactor[]; units: UnitSystem }) {
   return (
-    <Table
+    <KeyboardScrollTable
       caption="Safety factors"
       rowKey={(f) => `${f.location}-${f.name}-${f.category}`}
       rows={factors}
@@ -191,7 +191,7 @@ export function LineResults({ evaluation, units, stale }: { evaluation: Evaluati
     );
   }
   return (
-    <div id="figures" className={stale ? "space-y-6 opacity-60" : "space-y-6"} aria-busy={stale}>
+    <div className={stale ? "space-y-6 opacity-60" : "space-y-6"} aria-busy={stale}>
       <p role="status" className="rounded-control bg-info-100 p-3 text-info-700">
         Figures for the inputs as they are now, computed in your browser by engine {evaluation.result.engineVersion}
         {evaluation.result.extrapolated ? "; some tensions are beyond the last measured stretch point" : ""}. Loads and sags are rounded up; safety factors, margins and

@@ -9,7 +9,7 @@ import { ChoiceField, GroupProblem, QuantityField, TextField } from "./rig-field
 
 function Section({ title, children, problem }: { title: string; children: ReactNode; problem?: string }) {
   return (
-    <fieldset className="space-y-4 rounded-panel border border-ink-200 bg-white p-4 shadow-panel">
+    <fieldset className="min-w-0 space-y-4 rounded-panel border border-ink-200 bg-white p-4 shadow-panel">
       <legend className="px-1 text-lg font-semibold text-ink-900">{title}</legend>
       {problem ? <GroupProblem name={problem} /> : null}
       {children}
