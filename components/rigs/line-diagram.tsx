@@ -8,7 +8,7 @@ import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { RigResult } from "@/physics";
 
 const HEIGHT = 260;
-const PAD = { left: 28, right: 28, top: 40, bottom: 36 };
+const PAD = { left: 28, right: 28, top: 56, bottom: 36 };
 // The product's ink, spruce and caution tokens (tailwind.config.ts), for a canvas that cannot read classes.
 const INK = "#111822";
 const MUTED = "#4d5d71";
@@ -54,7 +54,7 @@ export function LineDiagram({ result, units }: { result: RigResult; units: UnitS
         {width > 0 ? (
           <Stage width={width} height={HEIGHT}>
             <Layer>
-              <Text x={8} y={8} text={exaggeration === 1 ? "True scale: heights not exaggerated" : `Vertical exaggeration ×${exaggeration}: heights drawn ${exaggeration} times their scale`} fontSize={14} fontStyle="bold" fill={INK} />
+              <Text x={8} y={8} width={width - 16} wrap="word" text={exaggeration === 1 ? "True scale: heights not exaggerated" : `Vertical exaggeration ×${exaggeration}: heights drawn ${exaggeration} times their scale`} fontSize={14} fontStyle="bold" fill={INK} />
               <Line points={[px(0), py(0), px(end.x), py(end.y)]} stroke={MUTED} strokeWidth={1} dash={[2, 6]} />
               <Line points={points(unloaded.profile)} stroke={MUTED} strokeWidth={2} dash={[10, 6]} />
               <Line points={points(walker.profile)} stroke={LOADED} strokeWidth={3} />

@@ -3,8 +3,8 @@ import { toShown, unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
 import type { Sweep, SweepPoint } from "@/physics";
 
 const WIDTH = 640;
-const PANEL = 170;
-const PAD = { left: 64, right: 16, top: 30, bottom: 36 };
+const PANEL = 210;
+const PAD = { left: 84, right: 24, top: 40, bottom: 44 };
 
 interface Series {
   label: string;
@@ -26,25 +26,25 @@ function SweepPanel({ title, kind, series, sweep, units, offset }: { title: stri
   const bottom = offset + PANEL - PAD.bottom;
   return (
     <g>
-      <text x={8} y={offset + 12} className="fill-ink-800 text-[13px] font-semibold">
+      <text x={8} y={offset + 22} className="fill-ink-800 text-[22px] font-semibold">
         {title} ({unit})
       </text>
       <line x1={PAD.left} x2={WIDTH - PAD.right} y1={bottom} y2={bottom} className="stroke-ink-400" />
       <line x1={PAD.left} x2={PAD.left} y1={offset + PAD.top} y2={bottom} className="stroke-ink-400" />
       {[low, high].map((v) => (
-        <text key={v} x={PAD.left - 6} y={y(v) + 4} textAnchor="end" className="fill-ink-700 text-[12px] tabular-nums">
+        <text key={v} x={PAD.left - 6} y={y(v) + 4} textAnchor="end" className="fill-ink-700 text-[20px] tabular-nums">
           {toShown(v, kind, units).toFixed(2)}
         </text>
       ))}
       {[0, span / 2, span].map((m) => (
-        <text key={m} x={x(m)} y={bottom + 16} textAnchor="middle" className="fill-ink-700 text-[12px]">
+        <text key={m} x={x(m)} y={bottom + 26} textAnchor={m === 0 ? "start" : m === span ? "end" : "middle"} className="fill-ink-700 text-[20px]">
           {formatDistance(m, units)}
         </text>
       ))}
       {series.map((s) => (
         <g key={s.label}>
-          <polyline fill="none" strokeWidth={2.5} strokeDasharray={s.dash} className="stroke-spruce-700" points={sweep.points.map((p) => `${x(p.x)},${y(s.value(p))}`).join(" ")} />
-          <circle cx={x(s.worst.x)} cy={y(s.value(s.worst))} r={6} className="fill-danger-600 stroke-white" strokeWidth={2} />
+          <polyline fill="none" strokeWidth={3.5} strokeDasharray={s.dash} className="stroke-spruce-700" points={sweep.points.map((p) => `${x(p.x)},${y(s.value(p))}`).join(" ")} />
+          <circle cx={x(s.worst.x)} cy={y(s.value(s.worst))} r={8} className="fill-danger-600 stroke-white" strokeWidth={2} />
         </g>
       ))}
     </g>
