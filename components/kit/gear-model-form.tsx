@@ -65,13 +65,17 @@ export function GearModelForm({ model }: GearModelFormProps) {
 
   return (
     <form onSubmit={onSubmit} noValidate className="max-w-2xl space-y-5">
-      <Select
-        label="Kind"
-        options={GEAR_KINDS.map((k) => ({ value: k, label: GEAR_KIND_LABELS[k] }))}
-        disabled={Boolean(model)}
-        hint={model ? "A model's kind is fixed once recorded." : undefined}
-        {...register("kind", { onChange: (event) => setValue("specs", emptySpecs(event.target.value as GearKind)) })}
-      />
+      {model ? (
+        <p>
+          <span className="font-semibold">Kind:</span> {GEAR_KIND_LABELS[model.kind]} (fixed once recorded)
+        </p>
+      ) : (
+        <Select
+          label="Kind"
+          options={GEAR_KINDS.map((k) => ({ value: k, label: GEAR_KIND_LABELS[k] }))}
+          {...register("kind", { onChange: (event) => setValue("specs", emptySpecs(event.target.value as GearKind)) })}
+        />
+      )}
       <Field label="Name" hint="An invented name or the maker's model name, as written on the gear." error={errors.name?.message} {...register("name")} />
       <fieldset className="space-y-4 rounded-panel border border-ink-200 p-4">
         <legend className="px-1 font-semibold">{GEAR_KIND_LABELS[kind]} specs</legend>

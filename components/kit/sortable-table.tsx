@@ -84,7 +84,8 @@ export function SortableTable<Row>({ caption, columns, rows, rowKey, searchText,
       {shown.length === 0 ? (
         empty
       ) : (
-        <div className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel">
+        // Focusable so that a keyboard can scroll a table wider than a phone's screen.
+        <div tabIndex={0} role="region" aria-label={caption} className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel">
           <table className="min-w-full text-left text-sm">
             <caption className="sr-only">{caption}</caption>
             <thead className="bg-ink-100 text-ink-700">

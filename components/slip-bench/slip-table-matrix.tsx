@@ -9,7 +9,8 @@ import { kN } from "./force-format";
 export function SlipTableMatrix({ table, cellHref }: { table: SlipTable; cellHref?: (deviceId: string, diameter: number) => string }) {
   const cells = new Map(table.cells.map((c) => [cellKey(c.deviceId, c.ropeDiameterMm), c]));
   return (
-    <div className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel">
+    // Focusable so that a keyboard can scroll the matrix when it is wider than the screen.
+    <div tabIndex={0} role="region" aria-label="Slip table" className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel">
       <table className="min-w-full text-sm">
         <caption className="sr-only">Slip table: lowest slip load by device and rope diameter</caption>
         <thead className="bg-ink-100 text-ink-700">

@@ -1,3 +1,4 @@
+import { readFileSync } from "node:fs";
 import { test, expect } from "@playwright/test";
 import { signInAs } from "./support/sign-in";
 
@@ -38,4 +39,30 @@ test("a tester uploads a trace, sees the chart and the detected onset, confirms 
   await expect(page.getByRole("heading", { name: "Tests of Wren Smooth Capture on 10.0 mm" })).toBeVisible();
   await expect(page.getByRole("table", { name: "Slip tests" })).toContainText("slipped at 5000 N");
   await page.screenshot({ path: ".data/test/playwright/slip-table-after.png", fullPage: true });
+});
+
+test("a lead exports the slip table and chart, publishes a read-only link, and revokes it", async ({ page, browser }) => {
+  await signInAs(page, "lead", "/slip-bench");
+  const csv = page.waitForEvent("download");
+  await page.getByRole("link", { name: "Download table as CSV" }).click();
+  const csvFile = await (await csv).path();
+  expect(readFileSync(csvFile, "utf8")).toMatch(/^device,rope_diameter_mm,tests,slips,lowest_slip_kN,slip_spread_kN,held_to_at_least_kN\r\n"Scree Line Grip",11\.0,1,1,4\.30/);
+  const png = page.waitForEvent("download");
+  await page.getByRole("button", { name: "Save chart as PNG" }).click();
+  const pngFile = readFileSync(await (await png).path());
+  // A PNG file starts with its eight-byte signature (ISO/IEC 15948 §5.2).
+  expect([...pngFile.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+
+  await page.getByRole("button", { name: "Publish a read-only link" }).click();
+  const url = (await page.locator("code").filter({ hasText: "/shared/slip-table/" }).textContent())!;
+  const visitor = await browser.newPage();
+  await visitor.goto(url);
+  await expect(visitor.getByRole("heading", { level: 1 })).toHaveText("Slip table of Greyrock Highline Collective");
+  await expect(visitor.getByRole("table")).toContainText("Talus Cam Brake");
+  await expect(visitor.getByText("Sol Brannock")).toHaveCount(0);
+
+  await page.getByRole("button", { name: "Revoke the link" }).click();
+  await expect(page.getByText("No link is published.")).toBeVisible();
+  const gone = await visitor.goto(url);
+  expect(gone?.status()).toBe(404);
 });
