@@ -6,7 +6,7 @@ import { formatCapacity, formatDepth, formatDistance, formatLoad, truncateRatio 
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { RigResult, SafetyFactor } from "@/physics";
 import type { Evaluation } from "./line-check";
-import { KeyboardScrollTable } from "./keyboard-scroll-table";
+import { Table } from "@/components/ui/table";
 import { SweepChart } from "./sweep-chart";
 import { Verdict, type VerdictTone } from "./verdict";
 
@@ -51,7 +51,7 @@ const where = (f: SafetyFactor) => (f.location === "line" ? "Line" : `Anchor ${f
 
 function SafetyFactorTable({ factors, units }: { factors: SafetyFactor[]; units: UnitSystem }) {
   return (
-    <KeyboardScrollTable
+    <Table
       caption="Safety factors"
       rowKey={(f) => `${f.location}-${f.name}-${f.category}`}
       rows={factors}

@@ -14,10 +14,13 @@ interface TableProps<Row> {
   rowKey: (row: Row) => string;
 }
 
-/** A data table that scrolls sideways on a phone instead of squeezing its columns. */
+/**
+ * A data table that scrolls sideways on a phone instead of squeezing its columns; the scrolling
+ * frame takes focus, so the arrow keys scroll it too.
+ */
 export function Table<Row>({ caption, columns, rows, rowKey }: TableProps<Row>) {
   return (
-    <div className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel">
+    <div tabIndex={0} role="region" aria-label={`${caption}, scrolls sideways`} className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel">
       <table className="min-w-full text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-ink-100 text-ink-700">
