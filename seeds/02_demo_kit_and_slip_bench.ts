@@ -95,7 +95,7 @@ export async function seed(knex: Knex): Promise<void> {
         const analysis = analyseTrace(parseTraceCsv(text, "kN"), "kN", 200);
         const storageKey = randomStorageKey();
         const sha256 = sha256Hex(bytes);
-        // Seeding runs before the S3 fake starts; the bytes are stored only when a bucket is configured.
+        // `npm start` and `npm test` seed with the S3 fake running; `db:seed` alone stores no bytes unless S3_BUCKET is set.
         if (storeBytes) await putObject(storageKey, bytes, "text/csv", sha256);
         const [{ id }] = await trx("uploads")
           .insert({ crew_id: crew.id, purpose: "trace", storage_key: storageKey, file_name: `${test.device}-${test.d}mm-pull.csv`, content_type: "text/csv", byte_size: bytes.byteLength, sha256, analysis: JSON.stringify(analysis), uploaded_by: tester.id })

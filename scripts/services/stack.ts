@@ -76,7 +76,6 @@ export async function startStack(profile: Profile): Promise<RunningStack> {
     cluster = await startCluster(projectDir, profile, settings.pgPort);
     await ensureDatabase(cluster, settings.database, profile === "test");
     const url = databaseUrl(cluster, settings.database);
-    await migrateAndSeed(url);
     const mailDir = path.join(settings.dataDir, "mail");
     s3 = await startS3Fake(settings.s3Port, path.join(settings.dataDir, "s3"), BUCKET);
     smtp = await startSmtpFake(settings.smtpPort, mailDir);
@@ -96,6 +95,9 @@ export async function startStack(profile: Profile): Promise<RunningStack> {
       DEV_MAILBOX_DIR: mailDir,
       COOKIE_SECURE: "false",
     };
+    // The demo seed stores its traces' bytes in the bucket, so it runs with the fakes' settings.
+    for (const name of ["S3_ENDPOINT", "S3_BUCKET", "S3_REGION", "S3_ACCESS_KEY_ID", "S3_SECRET_ACCESS_KEY", "S3_FORCE_PATH_STYLE"]) process.env[name] = env[name];
+    await migrateAndSeed(url);
     return { settings, env, stop };
   } catch (error) {
     await stop();

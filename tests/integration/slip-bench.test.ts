@@ -187,14 +187,23 @@ describe("roles, isolation and the published link", () => {
     expect((await as.outsider.get(`/api/uploads/${traced.traceUploadId}`)).status).toBe(404);
   });
 
-  it("answers a demo trace whose bytes were never stored with 404 and the reason, never 500", async () => {
+  it("serves the demo crew's seeded traces from the bucket, and answers missing bytes with 404 and the reason, never 500", async () => {
     const demo = await AppClient.signedIn(DEMO_PEOPLE.find((p) => p.role === "rigger")!.email, DEMO_PASSWORD);
     const { tests } = await (await demo.get("/api/slip-tests")).json();
     const traced = tests.find((t: { traceUploadId: string | null }) => t.traceUploadId);
     const response = await demo.get(`/api/uploads/${traced.traceUploadId}`);
-    // The seed stores the bytes only when it runs with a bucket configured.
-    expect([200, 404]).toContain(response.status);
-    if (response.status === 404) expect((await response.json()).error).toMatch(/are not in storage; its recorded analysis is kept/);
+    expect(response.status).toBe(200);
+    expect((await response.text()).split("\n").length).toBeGreaterThan(100);
+    const row = testDb("uploads").where({ id: traced.traceUploadId });
+    const { storage_key: storedKey } = await row.clone().first("storage_key");
+    await row.clone().update({ storage_key: "missing/never-stored" });
+    try {
+      const missing = await demo.get(`/api/uploads/${traced.traceUploadId}`);
+      expect(missing.status).toBe(404);
+      expect((await missing.json()).error).toMatch(/are not in storage; its recorded analysis is kept/);
+    } finally {
+      await row.clone().update({ storage_key: storedKey });
+    }
   });
 
   it("lets only a lead publish a read-only link that shows the table and nothing else, until revoked", async () => {
