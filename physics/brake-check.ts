@@ -36,6 +36,8 @@ export function checkBrake(device: string, ropeDiameterMm: number, bench: readon
   const slipped = results.filter((r) => r.result === "slipped").map((r) => r.forceN);
   const held = results.filter((r) => r.result === "held").map((r) => r.forceN);
   const kN = (f: number) => `${(f / 1000).toFixed(2)} kN`;
+  // A margin is never shown larger than it is: cut to two decimals, not rounded.
+  const marginText = (m: number) => (Math.floor(m * 100) / 100).toFixed(2);
   const base = { brakeForce, resultsUsed: results.length };
   if (slipped.length > 0) {
     const slipLoad = Math.min(...slipped);
@@ -49,7 +51,7 @@ export function checkBrake(device: string, ropeDiameterMm: number, bench: readon
       margin,
       highestLineTensionHeld: slipLoad * brakeAdvantage,
       message: holds
-        ? `${device} on ${ropeDiameterMm} mm holds: ${kN(brakeForce)} at the brake against a lowest measured slip of ${kN(slipLoad)} (margin ${margin.toFixed(2)}).`
+        ? `${device} on ${ropeDiameterMm} mm holds: ${kN(brakeForce)} at the brake against a lowest measured slip of ${kN(slipLoad)} (margin ${marginText(margin)}).`
         : `${device} on ${ropeDiameterMm} mm slips: ${kN(brakeForce)} at the brake reaches its lowest measured slip of ${kN(slipLoad)}.`,
     };
   }
@@ -64,7 +66,7 @@ export function checkBrake(device: string, ropeDiameterMm: number, bench: readon
         lowerBoundOnly: true,
         margin,
         highestLineTensionHeld: heldTo * brakeAdvantage,
-        message: `${device} on ${ropeDiameterMm} mm held to ${kN(heldTo)} on the bench without slipping; ${kN(brakeForce)} at the brake is within that (margin at least ${margin.toFixed(2)}; the slip load itself was never measured).`,
+        message: `${device} on ${ropeDiameterMm} mm held to ${kN(heldTo)} on the bench without slipping; ${kN(brakeForce)} at the brake is within that (margin at least ${marginText(margin)}; the slip load itself was never measured).`,
       };
     }
     return {
