@@ -2,15 +2,12 @@
 
 import { useMemo, useState, type ReactNode } from "react";
 import { controlClasses } from "@/components/ui/field";
+import { Table, type Column } from "@/components/ui/table";
 import { classNames } from "@/lib/class-names";
 
-export interface SortableColumn<Row> {
-  key: string;
-  header: string;
-  cell: (row: Row) => ReactNode;
+export interface SortableColumn<Row> extends Column<Row> {
   /** What the column sorts by; a column without it does not sort. */
   sortBy?: (row: Row) => string | number | null;
-  align?: "left" | "right";
 }
 
 export interface TableFilter<Row> {
@@ -84,50 +81,27 @@ export function SortableTable<Row>({ caption, columns, rows, rowKey, searchText,
       {shown.length === 0 ? (
         empty
       ) : (
-        // Focusable so that a keyboard can scroll a table wider than a phone's screen.
-        <div tabIndex={0} role="region" aria-label={caption} className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel">
-          <table className="min-w-full text-left text-sm">
-            <caption className="sr-only">{caption}</caption>
-            <thead className="bg-ink-100 text-ink-700">
-              <tr>
-                {columns.map((c) => {
-                  const active = sort?.key === c.key;
-                  return (
-                    <th
-                      key={c.key}
-                      scope="col"
-                      aria-sort={active ? (sort.descending ? "descending" : "ascending") : undefined}
-                      className={classNames("px-4 py-2 font-semibold", c.align === "right" && "text-right")}
-                    >
-                      {c.sortBy ? (
-                        <button
-                          type="button"
-                          className="min-h-target font-semibold hover:underline"
-                          onClick={() => setSort({ key: c.key, descending: active ? !sort.descending : false })}
-                        >
-                          {c.header} {active ? (sort.descending ? "▼" : "▲") : ""}
-                        </button>
-                      ) : (
-                        c.header
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-ink-100">
-              {shown.map((row) => (
-                <tr key={rowKey(row)}>
-                  {columns.map((c) => (
-                    <td key={c.key} className={classNames("px-4 py-3 align-top", c.align === "right" && "text-right tabular-nums")}>
-                      {c.cell(row)}
-                    </td>
-                  ))}
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <Table
+          caption={caption}
+          rows={shown}
+          rowKey={rowKey}
+          columns={columns.map((c) => {
+            const active = sort?.key === c.key;
+            return {
+              ...c,
+              sorted: active ? (sort.descending ? "descending" : "ascending") : undefined,
+              headerContent: c.sortBy ? (
+                <button
+                  type="button"
+                  className="min-h-target font-semibold hover:underline"
+                  onClick={() => setSort({ key: c.key, descending: active ? !sort.descending : false })}
+                >
+                  {c.header} {active ? (sort.descending ? "▼" : "▲") : ""}
+                </button>
+              ) : undefined,
+            };
+          })}
+        />
       )}
     </div>
   );

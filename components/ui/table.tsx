@@ -5,6 +5,10 @@ export interface Column<Row> {
   header: string;
   cell: (row: Row) => ReactNode;
   align?: "left" | "right";
+  /** What the header cell shows when it is more than its text, e.g. a sort button. */
+  headerContent?: ReactNode;
+  /** The column the rows are sorted by, announced to screen readers. */
+  sorted?: "ascending" | "descending";
 }
 
 interface TableProps<Row> {
@@ -26,8 +30,8 @@ export function Table<Row>({ caption, columns, rows, rowKey }: TableProps<Row>) 
         <thead className="bg-ink-100 text-ink-700">
           <tr>
             {columns.map((c) => (
-              <th key={c.key} scope="col" className={`px-4 py-3 font-semibold ${c.align === "right" ? "text-right" : ""}`}>
-                {c.header}
+              <th key={c.key} scope="col" aria-sort={c.sorted} className={`px-4 py-3 font-semibold ${c.align === "right" ? "text-right" : ""}`}>
+                {c.headerContent ?? c.header}
               </th>
             ))}
           </tr>
