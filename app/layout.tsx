@@ -6,6 +6,7 @@ import { ToastProvider } from "@/components/ui/toast";
 export const metadata: Metadata = {
   title: { default: "Spanwright", template: "%s · Spanwright" },
   description: "Plan, check and sign off slackline, longline and highline rigs with your crew.",
+  icons: { icon: "/favicon.svg" },
 };
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#11573d" };
