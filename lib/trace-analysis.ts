@@ -10,6 +10,8 @@ export interface TraceAnalysis {
   peakN: number;
   unit: ForceUnit;
   dropN: number;
+  /** When the pull ended, as the tester gave it; drops after it (the release) are not slips. */
+  pullEndS: number | null;
   timeColumn: string;
   forceColumn: string;
   onset: SlipOnset;
@@ -43,14 +45,14 @@ export function decimate(time: ArrayLike<number>, force: ArrayLike<number>, poin
 }
 
 /** Runs the engine's slip detection on a parsed trace and refuses a trace whose peak no bench could reach. */
-export function analyseTrace(trace: ParsedTrace, unit: ForceUnit, dropN: number): TraceAnalysis {
+export function analyseTrace(trace: ParsedTrace, unit: ForceUnit, dropN: number, pullEndS?: number): TraceAnalysis {
   let peak = -Infinity;
   for (const f of trace.force) if (f > peak) peak = f;
   if (peak < BENCH_FORCE_RANGE_N.min || peak > BENCH_FORCE_RANGE_N.max) {
     const shown = Number(fromNewtons(peak, unit).toPrecision(4));
     throw new RequestError(422, `The trace peaks at ${shown} ${unit}, outside what a slip bench measures (${benchRangeIn(unit)}): check the unit you chose.`);
   }
-  const onset = detectSlip(trace, dropN);
+  const onset = detectSlip(trace, dropN, pullEndS);
   const n = trace.time.length;
   return {
     rows: n,
@@ -58,6 +60,7 @@ export function analyseTrace(trace: ParsedTrace, unit: ForceUnit, dropN: number)
     peakN: peak,
     unit,
     dropN,
+    pullEndS: pullEndS ?? null,
     timeColumn: trace.timeColumn,
     forceColumn: trace.forceColumn,
     onset,

@@ -106,6 +106,12 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
             defaultValue={DEFAULT_DROP[traceUnit]}
             hint="A fall this far below the running maximum, while the pull goes on, marks the slip."
           />
+          <Field
+            label="Pull ended at (s), optional"
+            name="pullEndS"
+            inputMode="decimal"
+            hint="When the trace goes on past the pull into the release, give the time the pull stopped: the release is then not taken for a slip."
+          />
           <div className="flex items-end">
             <Button type="submit" tone="secondary" disabled={reading}>
               {reading ? "Reading the trace…" : "Read trace"}

@@ -52,11 +52,15 @@ export const SlipTestSchema = z
 export type SlipTestInput = z.input<typeof SlipTestSchema>;
 export type SlipTest = z.output<typeof SlipTestSchema>;
 
-/** How a trace is to be read: the force unit of its force column and the drop that counts as a slip, in that unit. */
+/**
+ * How a trace is to be read: the force unit of its force column, the drop that counts as a slip (in
+ * that unit), and when the pull ended, so that the release after it is not taken for a slip.
+ */
 export const TraceOptionsSchema = z
   .object({
     unit: forceUnit,
     drop: z.number({ error: "The drop that counts as a slip must be a number." }).positive("The drop that counts as a slip must be more than zero."),
+    pullEndS: z.number({ error: "The time the pull ended must be a number of seconds." }).positive("The time the pull ended must be more than 0 s.").optional(),
   })
   .superRefine((options, ctx) => {
     const dropN = toNewtons(options.drop, options.unit);

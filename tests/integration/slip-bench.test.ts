@@ -69,6 +69,27 @@ afterAll(async () => {
 
 const baseTest = () => ({ deviceModelId: brakeId, ropeModelId: ropeId, ropeDiameterMm: 10.5, testedOn: "2026-11-20", notes: "" });
 
+describe("a trace that records the release after the pull", () => {
+  // A pull that held to 4 kN, then released to zero: the release must not be taken for a slip once the tester says when the pull ended.
+  const text = ["time,force", ...Array.from({ length: 41 }, (_, i) => `${i},${i * 100}`), "41,2000", "42,0", "43,0"].join("\n");
+
+  it("is read as held to its maximum with the pull's end, and the end is kept with the analysis", async () => {
+    const response = await as.rigger.post("/api/slip-tests/traces", traceForm(text, { unit: "N", drop: "200", pullEndS: "40" }));
+    expect(response.status).toBe(201);
+    const { analysis } = await response.json();
+    expect(analysis.onset).toMatchObject({ kind: "held", forceN: 4000 });
+    expect(analysis.pullEndS).toBe(40);
+  });
+
+  it("refuses a pull end that is not a positive number of seconds, storing nothing", async () => {
+    const before = await counts();
+    const response = await as.rigger.post("/api/slip-tests/traces", traceForm(text, { unit: "N", drop: "200", pullEndS: "-3" }));
+    expect(response.status).toBe(400);
+    expect((await response.json()).fieldErrors.pullEndS).toMatch(/more than 0 s/);
+    expect(await counts()).toEqual(before);
+  });
+});
+
 describe("a trace, detected, confirmed, in the slip table", () => {
   it("detects the onset the trade's definition gives, keeps the file with its SHA-256, and saves the confirmed value", async () => {
     const { text, force } = pullCsv(6000);

@@ -36,3 +36,18 @@ describe("analyseTrace", () => {
     expect(() => analyseTrace(parseTraceCsv(csv, "N"), "N", 200)).toThrow(/peaks at 2 N, outside what a slip bench measures \(100–50000 N\): check the unit/);
   });
 });
+
+describe("analyseTrace with the time the pull ended", () => {
+  // A pull to 3 kN that held, then the release to zero (the shape of every held test that records its release).
+  const csv = ["t,F", ...Array.from({ length: 31 }, (_, i) => `${i},${i * 100}`), "31,1500", "32,0", "33,0"].join("\n");
+
+  it("takes the release for a slip when no end is given, as the definition of a drop says", () => {
+    expect(analyseTrace(parseTraceCsv(csv, "N"), "N", 200).onset).toMatchObject({ kind: "slipped", forceN: 3000 });
+  });
+
+  it("reports held to the maximum when the tester says when the pull ended", () => {
+    const analysis = analyseTrace(parseTraceCsv(csv, "N"), "N", 200, 30);
+    expect(analysis.onset).toMatchObject({ kind: "held", forceN: 3000, timeS: 30 });
+    expect(analysis.pullEndS).toBe(30);
+  });
+});

@@ -19,7 +19,7 @@ export const POST = crewRoute("slip.write", async ({ crew, user }, request) => {
     const raw = form.get(name);
     return typeof raw === "string" && raw.trim() !== "" ? Number(raw.replace(",", ".")) : undefined;
   };
-  const options = TraceOptionsSchema.parse({ unit: form.get("unit") ?? undefined, drop: numberField("drop") });
+  const options = TraceOptionsSchema.parse({ unit: form.get("unit") ?? undefined, drop: numberField("drop"), pullEndS: numberField("pullEndS") });
   const contentType = checkFileType("trace", file.name, bytes);
   let text: string;
   try {
@@ -27,7 +27,7 @@ export const POST = crewRoute("slip.write", async ({ crew, user }, request) => {
   } catch {
     throw new RequestError(415, `"${file.name}" is not UTF-8 text: save the trace as a UTF-8 CSV.`);
   }
-  const analysis = analyseTrace(parseTraceCsv(text, options.unit), options.unit, toNewtons(options.drop, options.unit));
+  const analysis = analyseTrace(parseTraceCsv(text, options.unit), options.unit, toNewtons(options.drop, options.unit), options.pullEndS);
   const sha256 = sha256Hex(bytes);
   const storageKey = randomStorageKey();
   await putObject(storageKey, bytes, contentType, sha256);

@@ -39,7 +39,7 @@ export default async function SlipTestPage({ params }: { params: Promise<{ id: s
             <>
               <dt className="font-semibold">Trace</dt>
               <dd>
-                Detected {analysis.onset.kind === "slipped" ? "slipped at" : "held to"} {shown(analysis.onset.forceN)} (drop {shown(analysis.dropN)}, engine {analysis.engineVersion});{" "}
+                Detected {analysis.onset.kind === "slipped" ? "slipped at" : "held to"} {shown(analysis.onset.forceN)} (drop {shown(analysis.dropN)}{analysis.pullEndS ? `, pull ended at ${analysis.pullEndS} s` : ""}, engine {analysis.engineVersion});{" "}
                 {corrected ? "corrected by the tester (see notes)" : "confirmed by the tester"}. <a href={`/api/uploads/${test.traceUploadId}`}>Download the trace</a>
               </dd>
             </>
