@@ -1,7 +1,6 @@
 import { db } from "./knex";
 import type { Role } from "@/lib/roles";
-
-export const INVITATION_DAYS = 7;
+import { INVITATION_DAYS, invitationProblem, type InvitationProblem } from "@/lib/invitation-state";
 
 export interface Invitation {
   id: string;
@@ -37,7 +36,7 @@ export async function createInvitation(input: { crewId: string; email: string; r
       role: input.role,
       token_hash: input.tokenHash,
       invited_by: input.invitedBy,
-      expires_at: db.raw(`now() + interval '${INVITATION_DAYS} days'`),
+      expires_at: db.raw("now() + make_interval(days => ?)", [INVITATION_DAYS]),
     })
     .returning("id");
   return withCrew().where("invitations.id", id).first(columns);
@@ -57,16 +56,14 @@ export function invitationByTokenHash(tokenHash: string): Promise<Invitation | u
   return withCrew().where("invitations.token_hash", tokenHash).first(columns);
 }
 
-export type AcceptOutcome = "joined" | "unknown" | "expired" | "used" | "revoked" | "wrong_email";
+export type AcceptOutcome = "joined" | InvitationProblem | "wrong_email";
 
 /** Joins the person to the crew once: the row is locked, checked and marked in one transaction. */
 export async function acceptInvitation(tokenHash: string, user: { id: string; email: string }): Promise<{ outcome: AcceptOutcome; crewId?: string }> {
   return db.transaction(async (trx) => {
     const row = await trx("invitations").where({ token_hash: tokenHash }).forUpdate().first();
-    if (!row) return { outcome: "unknown" };
-    if (row.revoked_at) return { outcome: "revoked" };
-    if (row.accepted_at) return { outcome: "used" };
-    if (new Date(row.expires_at) <= new Date()) return { outcome: "expired" };
+    const problem = invitationProblem(row && { revokedAt: row.revoked_at, acceptedAt: row.accepted_at, expiresAt: new Date(row.expires_at) });
+    if (problem) return { outcome: problem };
     if (row.email !== user.email.toLowerCase()) return { outcome: "wrong_email" };
     await trx("crew_members").insert({ crew_id: row.crew_id, user_id: user.id, role: row.role }).onConflict(["crew_id", "user_id"]).merge({ role: row.role });
     await trx("invitations").where({ id: row.id }).update({ accepted_at: trx.fn.now(), accepted_by: user.id });

@@ -1,10 +1,11 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { changePasswordSchema, PASSWORD_MIN, profileSchema } from "@/lib/validations/account";
+import { changePasswordSchema, profileSchema } from "@/lib/validations/account";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { FormError } from "@/components/forms/form-error";
 import { Field } from "@/components/ui/field";
+import { NewPasswordField } from "@/components/auth/new-password-field";
 import { Button } from "@/components/ui/button";
 import { useToast } from "@/components/ui/toast";
 
@@ -46,11 +47,8 @@ export function PasswordForm() {
     <form onSubmit={submit} noValidate className="max-w-md space-y-4">
       <FormError message={formError} />
       <Field label="Current password" type="password" autoComplete="current-password" error={form.formState.errors.currentPassword?.message} {...form.register("currentPassword")} />
-      <Field
+      <NewPasswordField
         label="New password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
         error={form.formState.errors.newPassword?.message}
         {...form.register("newPassword")}
       />

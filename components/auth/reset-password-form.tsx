@@ -2,10 +2,10 @@
 
 import Link from "next/link";
 import { useState } from "react";
-import { PASSWORD_MIN, resetPasswordSchema } from "@/lib/validations/account";
+import { resetPasswordSchema } from "@/lib/validations/account";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { FormError } from "@/components/forms/form-error";
-import { Field } from "@/components/ui/field";
+import { NewPasswordField } from "@/components/auth/new-password-field";
 import { Button } from "@/components/ui/button";
 
 export function ResetPasswordForm({ token }: { token: string }) {
@@ -25,11 +25,8 @@ export function ResetPasswordForm({ token }: { token: string }) {
     <form onSubmit={submit} noValidate className="space-y-4">
       <FormError message={formError ?? form.formState.errors.token?.message ?? null} />
       <input type="hidden" {...form.register("token")} />
-      <Field
+      <NewPasswordField
         label="New password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
         error={form.formState.errors.password?.message}
         {...form.register("password")}
       />

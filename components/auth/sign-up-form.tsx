@@ -1,11 +1,12 @@
 "use client";
 
 import Link from "next/link";
-import { PASSWORD_MIN, signUpSchema } from "@/lib/validations/account";
+import { signUpSchema } from "@/lib/validations/account";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { useGoTo } from "@/components/forms/use-go-to";
 import { FormError } from "@/components/forms/form-error";
 import { Field } from "@/components/ui/field";
+import { NewPasswordField } from "@/components/auth/new-password-field";
 import { Button } from "@/components/ui/button";
 
 export function SignUpForm({ next }: { next: string }) {
@@ -20,11 +21,8 @@ export function SignUpForm({ next }: { next: string }) {
       <FormError message={formError} />
       <Field label="Your name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
       <Field label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
-      <Field
+      <NewPasswordField
         label="Password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
         error={errors.password?.message}
         {...form.register("password")}
       />

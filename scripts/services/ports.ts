@@ -1,5 +1,11 @@
 import net from "node:net";
 import { StackError } from "./fail";
+import type { Profile } from "./stack";
+
+/** The variable that sets a port: `PORT`, `PG_PORT`… for development, `TEST_PORT`, `TEST_PG_PORT`… for the tests. */
+export function portVariable(profile: Profile, name: "PORT" | "PG_PORT" | "S3_PORT" | "SMTP_PORT"): string {
+  return profile === "dev" ? name : `TEST_${name}`;
+}
 
 /** Resolves when nothing listens on 127.0.0.1:port; otherwise a StackError naming the port. */
 export async function assertPortFree(port: number, what: string, envName: string): Promise<void> {

@@ -3,7 +3,8 @@ import path from "node:path";
 import crypto from "node:crypto";
 import pg from "pg";
 import { aptInstall } from "./apt";
-import { assertPortFree } from "./ports";
+import { assertPortFree, portVariable } from "./ports";
+import type { Profile } from "./stack";
 import { StackError } from "./fail";
 import { isRoot, runCaptured } from "./process";
 
@@ -56,7 +57,7 @@ function serverUserCanWrite(dir: string): boolean {
  * The cluster's folder: inside the project where the postgres user can reach it, otherwise in a
  * folder that user owns, named after the checkout so that two clones never share a cluster.
  */
-function clusterDir(projectDir: string, profile: string): string {
+function clusterDir(projectDir: string, profile: Profile): string {
   const inside = path.join(projectDir, ".data", profile, "pg");
   fs.mkdirSync(inside, { recursive: true });
   if (serverUserCanWrite(inside)) return inside;
@@ -100,7 +101,7 @@ function runningPort(dataDir: string): number | null {
 }
 
 /** Creates (once) and starts the project's cluster on 127.0.0.1:port. */
-export async function startCluster(projectDir: string, profile: string, port: number): Promise<PostgresCluster> {
+export async function startCluster(projectDir: string, profile: Profile, port: number): Promise<PostgresCluster> {
   const bin = await ensurePostgresBinaries();
   const dataDir = clusterDir(projectDir, profile);
   initCluster(bin, dataDir);
@@ -112,7 +113,7 @@ export async function startCluster(projectDir: string, profile: string, port: nu
     }
     return cluster;
   }
-  await assertPortFree(port, "PostgreSQL", profile === "dev" ? "PG_PORT" : "TEST_PG_PORT");
+  await assertPortFree(port, "PostgreSQL", portVariable(profile, "PG_PORT"));
   const logFile = path.join(dataDir, "server.log");
   const start = asServerUser(path.join(bin, "pg_ctl"), [
     "start", "-D", dataDir, "-l", logFile, "-w", "-t", "60",

@@ -1,5 +1,6 @@
 import path from "node:path";
-import { assertPortFree } from "./ports";
+import { assertPortFree, portVariable } from "./ports";
+import { StackError } from "./fail";
 import { databaseUrl, ensureDatabase, startCluster, stopCluster, type PostgresCluster } from "./postgres";
 import { startS3Fake, type S3Fake } from "./s3-fake";
 import { startSmtpFake, type SmtpFake } from "./smtp-fake";
@@ -24,7 +25,7 @@ function portFromEnv(name: string, fallback: number): number {
   if (raw === undefined || raw === "") return fallback;
   const port = Number(raw);
   if (!Number.isInteger(port) || port < 1024 || port > 65535) {
-    throw new Error(`${name}=${raw} is not a usable port: give a whole number from 1024 to 65535.`);
+    throw new StackError(`${name}=${raw} is not a usable port: give a whole number from 1024 to 65535.`);
   }
   return port;
 }
@@ -34,10 +35,10 @@ export function stackSettings(profile: Profile): StackSettings {
   const dev = profile === "dev";
   return {
     profile,
-    appPort: portFromEnv(dev ? "PORT" : "TEST_PORT", dev ? 3000 : 3100),
-    pgPort: portFromEnv(dev ? "PG_PORT" : "TEST_PG_PORT", dev ? 5491 : 5492),
-    s3Port: portFromEnv(dev ? "S3_PORT" : "TEST_S3_PORT", dev ? 4591 : 4592),
-    smtpPort: portFromEnv(dev ? "SMTP_PORT" : "TEST_SMTP_PORT", dev ? 2591 : 2592),
+    appPort: portFromEnv(portVariable(profile, "PORT"), dev ? 3000 : 3100),
+    pgPort: portFromEnv(portVariable(profile, "PG_PORT"), dev ? 5491 : 5492),
+    s3Port: portFromEnv(portVariable(profile, "S3_PORT"), dev ? 4591 : 4592),
+    smtpPort: portFromEnv(portVariable(profile, "SMTP_PORT"), dev ? 2591 : 2592),
     database: dev ? "spanwright" : "spanwright_test",
     dataDir: path.join(projectDir, ".data", profile),
   };
@@ -58,10 +59,9 @@ const BUCKET = "spanwright-uploads";
  */
 export async function startStack(profile: Profile): Promise<RunningStack> {
   const settings = stackSettings(profile);
-  const prefix = profile === "dev" ? "" : "TEST_";
-  await assertPortFree(settings.appPort, "the web app", profile === "dev" ? "PORT" : "TEST_PORT");
-  await assertPortFree(settings.s3Port, "the local S3 fake", `${prefix}S3_PORT`);
-  await assertPortFree(settings.smtpPort, "the local SMTP fake", `${prefix}SMTP_PORT`);
+  await assertPortFree(settings.appPort, "the web app", portVariable(profile, "PORT"));
+  await assertPortFree(settings.s3Port, "the local S3 fake", portVariable(profile, "S3_PORT"));
+  await assertPortFree(settings.smtpPort, "the local SMTP fake", portVariable(profile, "SMTP_PORT"));
 
   let cluster: PostgresCluster | null = null;
   let s3: S3Fake | null = null;
@@ -96,7 +96,7 @@ export async function startStack(profile: Profile): Promise<RunningStack> {
       COOKIE_SECURE: "false",
     };
     // The demo seed stores its traces' bytes in the bucket, so it runs with the fakes' settings.
-    for (const name of ["S3_ENDPOINT", "S3_BUCKET", "S3_REGION", "S3_ACCESS_KEY_ID", "S3_SECRET_ACCESS_KEY", "S3_FORCE_PATH_STYLE"]) process.env[name] = env[name];
+    for (const [name, value] of Object.entries(env)) if (name.startsWith("S3_")) process.env[name] = value;
     await migrateAndSeed(url);
     return { settings, env, stop };
   } catch (error) {

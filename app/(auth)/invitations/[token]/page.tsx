@@ -3,6 +3,7 @@ import Link from "next/link";
 import { invitationByTokenHash } from "@/db/invitations";
 import { getCurrentSession } from "@/lib/auth/session";
 import { hashToken } from "@/lib/tokens";
+import { INVITATION_REFUSALS, invitationProblem } from "@/lib/invitation-state";
 import { buttonClasses } from "@/components/ui/button";
 import { AcceptInvitation } from "@/components/crew/accept-invitation";
 
@@ -14,12 +15,12 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
   const signedIn = await getCurrentSession();
   const here = `/invitations/${token}`;
 
-  if (!invitation || invitation.revokedAt || invitation.acceptedAt || invitation.expiresAt <= new Date()) {
-    const why = !invitation ? "is not valid" : invitation.revokedAt ? "was withdrawn" : invitation.acceptedAt ? "has been used already" : "is more than 7 days old";
+  const problem = invitationProblem(invitation);
+  if (problem || !invitation) {
     return (
       <>
         <h1 className="mb-2 text-xl">This invitation cannot be used</h1>
-        <p role="alert">The link {why}. Ask the crew&apos;s owner to invite you again.</p>
+        <p role="alert">{INVITATION_REFUSALS[problem ?? "unknown"].message}</p>
       </>
     );
   }

@@ -1,7 +1,8 @@
 import { NextResponse } from "next/server";
 import { crewRoute, parseBody } from "@/lib/api";
 import { inviteSchema } from "@/lib/validations/crew";
-import { createInvitation, INVITATION_DAYS, openInvitationsOf } from "@/db/invitations";
+import { createInvitation, openInvitationsOf } from "@/db/invitations";
+import { INVITATION_DAYS } from "@/lib/invitation-state";
 import { newToken } from "@/lib/tokens";
 import { sendMail } from "@/lib/mail/transport";
 import { invitationMail } from "@/lib/mail/messages";

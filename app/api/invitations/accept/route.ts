@@ -5,20 +5,13 @@ import { RequestError } from "@/lib/http-errors";
 import { acceptInvitationSchema } from "@/lib/validations/crew";
 import { acceptInvitation } from "@/db/invitations";
 import { hashToken } from "@/lib/tokens";
-
-const refusals = {
-  unknown: [404, "This invitation link is not valid: ask the crew's owner for a new one."],
-  revoked: [410, "This invitation was withdrawn: ask the crew's owner for a new one."],
-  used: [410, "This invitation has been used already."],
-  expired: [410, "This invitation is more than 7 days old: ask the crew's owner for a new one."],
-  wrong_email: [422, "This invitation is for another e-mail address: sign in with the address it was sent to."],
-} as const;
+import { INVITATION_REFUSALS } from "@/lib/invitation-state";
 
 export const POST = signedInRoute(async ({ user }, request) => {
   const { token } = await parseBody(request, acceptInvitationSchema);
   const result = await acceptInvitation(hashToken(token), user);
   if (result.outcome !== "joined") {
-    const [status, message] = refusals[result.outcome];
+    const { status, message } = INVITATION_REFUSALS[result.outcome];
     throw new RequestError(status, message);
   }
   await chooseCrew(result.crewId!);
