@@ -12,19 +12,10 @@ export const PERMISSIONS = {
   "slip.read": "member",
   "slip.write": "rigger",
   "slip.publish": "lead",
-  "site.read": "member",
-  "site.write": "rigger",
   "rig.read": "member",
-  "rig.write": "rigger",
-  "rig.review": "lead",
-  "field.record": "member",
 } as const satisfies Record<string, Role>;
 
 export type Action = keyof typeof PERMISSIONS;
-
-export function isRole(value: unknown): value is Role {
-  return typeof value === "string" && (ROLES as readonly string[]).includes(value);
-}
 
 /** True when `role` is at least the least role the action needs. */
 export function can(role: Role, action: Action): boolean {

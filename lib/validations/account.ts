@@ -41,5 +41,3 @@ export const changePasswordSchema = z.object({
   newPassword,
 });
 
-export type SignInInput = z.infer<typeof signInSchema>;
-export type SignUpInput = z.infer<typeof signUpSchema>;
