@@ -1,15 +1,26 @@
-/** One request to a route handler from a button: the parsed body, or the server's own words on failure. */
-export async function callApi(method: "POST" | "PATCH" | "DELETE", url: string, body?: unknown): Promise<{ ok: true; body: Record<string, unknown> } | { ok: false; error: string }> {
+export type ApiAnswer = { ok: true; body: Record<string, unknown> } | { ok: false; error: string; fieldErrors: Record<string, string> };
+
+/**
+ * One request to a route handler: a JSON body, or a FormData body (sent as the browser encodes it, so no
+ * content-type header is set here). Gives the parsed answer, or the server's own words and field errors on failure.
+ */
+export async function callApi(method: "POST" | "PATCH" | "PUT" | "DELETE", url: string, body?: unknown): Promise<ApiAnswer> {
+  const init: RequestInit = { method };
+  if (body instanceof FormData) init.body = body;
+  else if (body !== undefined) {
+    init.body = JSON.stringify(body);
+    init.headers = { "content-type": "application/json" };
+  }
   try {
-    const response = await fetch(url, {
-      method,
-      headers: body === undefined ? undefined : { "content-type": "application/json" },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
+    const response = await fetch(url, init);
     const parsed = (await response.json().catch(() => ({}))) as Record<string, unknown>;
     if (response.ok) return { ok: true, body: parsed };
-    return { ok: false, error: typeof parsed.error === "string" ? parsed.error : `The server answered ${response.status}; nothing was changed.` };
+    return {
+      ok: false,
+      error: typeof parsed.error === "string" ? parsed.error : `The server answered ${response.status}; nothing was changed.`,
+      fieldErrors: (parsed.fieldErrors as Record<string, string> | undefined) ?? {},
+    };
   } catch {
-    return { ok: false, error: "The server could not be reached: check the connection and try again." };
+    return { ok: false, error: "The server could not be reached: check the connection and try again. Nothing was changed.", fieldErrors: {} };
   }
 }

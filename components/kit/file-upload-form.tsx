@@ -5,8 +5,8 @@ import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { useToast } from "@/components/ui/toast";
-import { send } from "@/lib/client-requests";
-import { FormError } from "./form-error";
+import { callApi } from "@/components/forms/call-api";
+import { FormError } from "@/components/forms/form-error";
 
 const ACCEPT = { photo: "image/jpeg,image/png,image/webp", manual: "application/pdf" } as const;
 const HINT = { photo: "A JPEG, PNG or WebP image, at most 15 MiB.", manual: "A PDF, at most 30 MiB." } as const;
@@ -26,7 +26,7 @@ export function FileUploadForm({ purpose, owner }: { purpose: "photo" | "manual"
     for (const [key, value] of Object.entries(owner)) data.set(key, value);
     setBusy(true);
     setError(null);
-    const answer = await send(`/api/uploads?purpose=${purpose}`, "POST", data);
+    const answer = await callApi("POST", `/api/uploads?purpose=${purpose}`, data);
     setBusy(false);
     if (!answer.ok) return setError(answer.error);
     form.reset();

@@ -1,16 +1,15 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useState } from "react";
-import { useFieldArray, useForm, useWatch, type Resolver } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { useFieldArray, useWatch } from "react-hook-form";
+import type { z } from "zod";
+import { asNumber } from "@/components/forms/as-number";
+import { FormError } from "@/components/forms/form-error";
+import { useApiForm } from "@/components/forms/use-api-form";
 import { Button } from "@/components/ui/button";
 import { Field, FieldFrame, controlClasses } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
-import { send } from "@/lib/client-requests";
 import { GEAR_KINDS, GEAR_KIND_LABELS, GearModelSchema, MEASURES, SPEC_SCHEMAS, type GearKind, type GearModelInput, type MeasureKey } from "@/lib/validations/kit";
-import { FormError } from "./form-error";
-import { asNumber, errorAt, showServerErrors } from "./server-errors";
 
 // One form for every kind: the fields a kind shows are the keys of that kind's spec schema.
 interface FormValues {
@@ -18,6 +17,14 @@ interface FormValues {
   name: string;
   notes: string;
   specs: Record<string, unknown> & { stretchPoints?: { tensionKN?: number; elongationPct?: number }[] };
+}
+
+/** The message of the error at a dotted path of react-hook-form's errors ("specs.stretchPoints.1.tensionKN"). */
+function errorAt(errors: unknown, path: string): string | undefined {
+  let node: unknown = errors;
+  for (const part of path.split(".")) node = (node as Record<string, unknown> | undefined)?.[part];
+  const message = (node as { message?: unknown } | undefined)?.message;
+  return typeof message === "string" ? message : undefined;
 }
 
 const ORIGIN_AND_ONE = [
@@ -40,31 +47,24 @@ interface GearModelFormProps {
 
 export function GearModelForm({ model }: GearModelFormProps) {
   const router = useRouter();
-  const [serverError, setServerError] = useState<string | null>(null);
-  const form = useForm<FormValues>({
-    resolver: zodResolver(GearModelSchema) as unknown as Resolver<FormValues>,
+  // The form holds every kind's fields loosely; the schema checks the chosen kind's.
+  const { form, submit, formError } = useApiForm(GearModelSchema as unknown as z.ZodType<z.output<typeof GearModelSchema>, FormValues>, {
+    url: model ? `/api/kit/models/${model.id}` : "/api/kit/models",
+    method: model ? "PATCH" : "POST",
     defaultValues: model ? (model as FormValues) : { kind: "webbing", name: "", notes: "", specs: emptySpecs("webbing") },
+    onSuccess: (body) => {
+      router.push(`/kit/models/${(body.model as { id: string }).id}`);
+      router.refresh();
+    },
   });
-  const { register, handleSubmit, setValue, setError, formState } = form;
+  const { register, setValue, formState } = form;
   const { errors, isSubmitting } = formState;
-  const kind = useWatch({ control: form.control, name: "kind" });
+  const kind = useWatch({ control: form.control, name: "kind" }) as GearKind;
   const points = useFieldArray({ control: form.control, name: "specs.stretchPoints" as "specs.stretchPoints" & never });
   const specKeys = Object.keys(SPEC_SCHEMAS[kind].shape);
 
-  const onSubmit = handleSubmit(async (values) => {
-    setServerError(null);
-    const answer = await send<{ model: { id: string } }>(model ? `/api/kit/models/${model.id}` : "/api/kit/models", model ? "PATCH" : "POST", values);
-    if (!answer.ok) {
-      setServerError(answer.error);
-      showServerErrors(setError, answer.fieldErrors);
-      return;
-    }
-    router.push(`/kit/models/${answer.data.model.id}`);
-    router.refresh();
-  });
-
   return (
-    <form onSubmit={onSubmit} noValidate className="max-w-2xl space-y-5">
+    <form onSubmit={submit} noValidate className="max-w-2xl space-y-5">
       {model ? (
         <p>
           <span className="font-semibold">Kind:</span> {GEAR_KIND_LABELS[model.kind]} (fixed once recorded)
@@ -156,7 +156,7 @@ export function GearModelForm({ model }: GearModelFormProps) {
       <FieldFrame id="model-notes" label="Notes" error={errors.notes?.message}>
         <textarea id="model-notes" rows={3} className={`${controlClasses} py-2`} {...register("notes")} />
       </FieldFrame>
-      <FormError message={serverError} />
+      <FormError message={formError} />
       <Button type="submit" disabled={isSubmitting}>
         {model ? "Save changes" : "Add to the Kit"}
       </Button>

@@ -4,7 +4,7 @@ import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
 import { GEAR_KIND_LABELS, INSPECTION_RESULT_LABELS } from "@/lib/validations/kit";
 import type { GearItemRow } from "@/db/kit";
-import { SortableTable } from "./sortable-table";
+import { SortableTable } from "@/components/ui/sortable-table";
 import { StatusBadge } from "./status-badge";
 
 export function ItemTable({ items, showModel = true }: { items: GearItemRow[]; showModel?: boolean }) {

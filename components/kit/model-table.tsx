@@ -4,7 +4,7 @@ import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
 import { GEAR_KINDS, GEAR_KIND_LABELS } from "@/lib/validations/kit";
 import type { GearModelRow } from "@/db/kit";
-import { SortableTable } from "./sortable-table";
+import { SortableTable } from "@/components/ui/sortable-table";
 import { specSummary } from "./spec-summary";
 import { StatusBadge } from "./status-badge";
 

@@ -3,8 +3,8 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { FormError } from "@/components/kit/form-error";
-import { send } from "@/lib/client-requests";
+import { callApi } from "@/components/forms/call-api";
+import { FormError } from "@/components/forms/form-error";
 
 /** A lead publishes (or revokes) the read-only link to the crew's slip table. */
 export function PublishLink({ published }: { published: { createdAt: string; createdBy: string } | null }) {
@@ -13,14 +13,14 @@ export function PublishLink({ published }: { published: { createdAt: string; cre
   const [error, setError] = useState<string | null>(null);
 
   async function publish() {
-    const answer = await send<{ url: string }>("/api/slip-table/link", "POST");
+    const answer = await callApi("POST", "/api/slip-table/link");
     if (!answer.ok) return setError(answer.error);
-    setUrl(answer.data.url);
+    setUrl(String(answer.body.url));
     router.refresh();
   }
 
   async function revoke() {
-    const answer = await send("/api/slip-table/link", "DELETE");
+    const answer = await callApi("DELETE", "/api/slip-table/link");
     if (!answer.ok) return setError(answer.error);
     setUrl(null);
     router.refresh();

@@ -2,18 +2,17 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm, type Resolver } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { asNumber } from "@/components/forms/as-number";
+import { callApi } from "@/components/forms/call-api";
+import { FormError } from "@/components/forms/form-error";
+import { useApiForm } from "@/components/forms/use-api-form";
 import { Button } from "@/components/ui/button";
 import { Field, FieldFrame, controlClasses } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { useToast } from "@/components/ui/toast";
 import { TraceChart } from "@/components/charts/trace-chart";
-import { FormError } from "@/components/kit/form-error";
-import { asNumber, showServerErrors } from "@/components/kit/server-errors";
-import { send } from "@/lib/client-requests";
 import type { TraceAnalysis } from "@/lib/trace-analysis";
-import { DEFAULT_DROP, FORCE_UNITS, SLIP_RESULTS, SLIP_RESULT_LABELS, SlipTestSchema, type SlipTestInput } from "@/lib/validations/slip-tests";
+import { DEFAULT_DROP, FORCE_UNITS, SLIP_RESULTS, SLIP_RESULT_LABELS, SlipTestSchema, type SlipTest, type SlipTestInput } from "@/lib/validations/slip-tests";
 import { fromNewtons, type ForceUnit } from "@/physics";
 
 export interface DeviceOption {
@@ -35,15 +34,20 @@ const unitOptions = FORCE_UNITS.map((u) => ({ value: u, label: u }));
 export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; ropes: RopeOption[] }) {
   const router = useRouter();
   const notify = useToast();
-  const [serverError, setServerError] = useState<string | null>(null);
   const [traceError, setTraceError] = useState<string | null>(null);
   const [reading, setReading] = useState(false);
   const [traceUnit, setTraceUnit] = useState<ForceUnit>("kN");
   const [analysis, setAnalysis] = useState<TraceAnalysis | null>(null);
-  const { register, handleSubmit, setValue, setError, formState } = useForm<SlipTestInput>({
-    resolver: zodResolver(SlipTestSchema) as unknown as Resolver<SlipTestInput>,
+  const { form, submit, formError } = useApiForm<SlipTestInput, SlipTest>(SlipTestSchema, {
+    url: "/api/slip-tests",
     defaultValues: { deviceModelId: devices[0]?.id, result: "slipped", forceUnit: "kN", testedOn: new Date().toISOString().slice(0, 10), notes: "" },
+    onSuccess: () => {
+      notify({ title: "Slip test saved", description: "The slip table now includes it.", tone: "ok" });
+      router.push("/slip-bench");
+      router.refresh();
+    },
   });
+  const { register, setValue, formState } = form;
   const { errors, isSubmitting } = formState;
 
   async function readTrace(form: HTMLFormElement) {
@@ -52,33 +56,20 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
     if (!(file instanceof File) || file.size === 0) return setTraceError("Choose the trace's CSV file first.");
     setReading(true);
     setTraceError(null);
-    const answer = await send<{ upload: { id: string }; analysis: TraceAnalysis }>("/api/slip-tests/traces", "POST", data);
+    const answer = await callApi("POST", "/api/slip-tests/traces", data);
     setReading(false);
     if (!answer.ok) {
       setAnalysis(null);
       setValue("traceUploadId", undefined);
       return setTraceError(answer.error);
     }
-    const found = answer.data.analysis;
+    const found = answer.body.analysis as TraceAnalysis;
     setAnalysis(found);
-    setValue("traceUploadId", answer.data.upload.id);
+    setValue("traceUploadId", (answer.body.upload as { id: string }).id);
     setValue("result", found.onset.kind);
     setValue("force", Number(fromNewtons(found.onset.forceN, found.unit).toPrecision(4)));
     setValue("forceUnit", found.unit);
   }
-
-  const onSubmit = handleSubmit(async (values) => {
-    setServerError(null);
-    const answer = await send("/api/slip-tests", "POST", values);
-    if (!answer.ok) {
-      setServerError(answer.error);
-      showServerErrors(setError, answer.fieldErrors);
-      return;
-    }
-    notify({ title: "Slip test saved", description: "The slip table now includes it.", tone: "ok" });
-    router.push("/slip-bench");
-    router.refresh();
-  });
 
   return (
     <div className="max-w-3xl space-y-8">
@@ -135,7 +126,7 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
         ) : null}
       </section>
 
-      <form onSubmit={onSubmit} noValidate className="space-y-5" aria-labelledby="test-heading">
+      <form onSubmit={submit} noValidate className="space-y-5" aria-labelledby="test-heading">
         <h2 id="test-heading">The test</h2>
         <div className="grid gap-4 md:grid-cols-2">
           <Select label="Device tested" options={devices.map((d) => ({ value: d.id, label: d.name }))} error={errors.deviceModelId?.message} {...register("deviceModelId")} />
@@ -163,7 +154,7 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
           <textarea id="slip-notes" rows={3} className={`${controlClasses} py-2`} placeholder="Rope condition, pull rate, anything unusual" {...register("notes")} />
         </FieldFrame>
         <input type="hidden" {...register("traceUploadId", { setValueAs: (v) => (v === "" ? undefined : v) })} />
-        <FormError message={serverError} />
+        <FormError message={formError} />
         <Button type="submit" disabled={isSubmitting}>
           {analysis ? "Confirm and save slip test" : "Save slip test"}
         </Button>

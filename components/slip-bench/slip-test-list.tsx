@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
-import { SortableTable } from "@/components/kit/sortable-table";
+import { SortableTable } from "@/components/ui/sortable-table";
 import { fromNewtons } from "@/physics";
 import { isCorrection } from "@/lib/slip-table";
 import type { SlipTestRow } from "@/db/slip-tests";

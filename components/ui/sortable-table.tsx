@@ -1,8 +1,9 @@
 "use client";
 
 import { useMemo, useState, type ReactNode } from "react";
-import { controlClasses } from "@/components/ui/field";
-import { Table, type Column } from "@/components/ui/table";
+import { controlClasses } from "./field";
+import { Select, type SelectOption } from "./select";
+import { Table, type Column } from "./table";
 import { classNames } from "@/lib/class-names";
 
 export interface SortableColumn<Row> extends Column<Row> {
@@ -12,7 +13,7 @@ export interface SortableColumn<Row> extends Column<Row> {
 
 export interface TableFilter<Row> {
   label: string;
-  options: { value: string; label: string }[];
+  options: SelectOption[];
   valueOf: (row: Row) => string;
 }
 
@@ -58,21 +59,13 @@ export function SortableTable<Row>({ caption, columns, rows, rowKey, searchText,
           <input type="search" value={query} onChange={(e) => setQuery(e.target.value)} className={classNames(controlClasses, "mt-1 font-normal")} />
         </label>
         {filters.map((f, i) => (
-          <label key={f.label} className="block text-sm font-semibold text-ink-800">
-            {f.label}
-            <select
-              value={chosen[i]}
-              onChange={(e) => setChosen((list) => list.map((v, j) => (j === i ? e.target.value : v)))}
-              className={classNames(controlClasses, "mt-1 pr-8 font-normal")}
-            >
-              <option value="">All</option>
-              {f.options.map((o) => (
-                <option key={o.value} value={o.value}>
-                  {o.label}
-                </option>
-              ))}
-            </select>
-          </label>
+          <Select
+            key={f.label}
+            label={f.label}
+            options={[{ value: "", label: "All" }, ...f.options]}
+            value={chosen[i]}
+            onChange={(e) => setChosen((list) => list.map((v, j) => (j === i ? e.target.value : v)))}
+          />
         ))}
       </div>
       <p className="text-sm text-ink-500" aria-live="polite">
