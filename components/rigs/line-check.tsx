@@ -3,7 +3,7 @@
 import { useDeferredValue, useMemo } from "react";
 import { FormProvider, useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { evaluateRig, RigInputError, RigInputSchema, SolveError, type RigInput, type RigInputDraft, type RigResult } from "@/physics";
+import { evaluateRig, RigInputError, RigInputSchema, SolveError, type RigInput, type RigInputDraft, type RigResult, type SlipResult } from "@/physics";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import { RigFormSettingsProvider, type EngineFieldError } from "./rig-form-context";
 import { RigInputForm } from "./rig-input-form";
@@ -29,16 +29,18 @@ function evaluate(input: unknown): Evaluation {
 /**
  * The line check: the rig's inputs on one side, the engine's figures on the other, recomputed in the
  * browser on every change; the server confirms them on request and its result is the one of record.
+ * The crew's slip bench comes first in the input's slip results, before any the rigger types.
  */
-export function LineCheck({ startingRig, units }: { startingRig: RigInputDraft; units: UnitSystem }) {
+export function LineCheck({ startingRig, units, crewBench }: { startingRig: RigInputDraft; units: UnitSystem; crewBench: readonly SlipResult[] }) {
   const form = useForm<RigInputDraft, unknown, RigInput>({ resolver: zodResolver(RigInputSchema), mode: "onChange", defaultValues: startingRig });
-  const values = useWatch({ control: form.control });
+  const watched = useWatch({ control: form.control });
+  const values = { ...watched, slipBench: [...crewBench, ...(watched.slipBench ?? [])] };
   // The JSON the server would receive: the browser evaluates exactly that, so both see the same input.
   const inputJson = useDeferredValue(JSON.stringify(values));
   const evaluation = useMemo(() => evaluate(JSON.parse(inputJson)), [inputJson]);
   const engineError = evaluation.kind === "input" ? evaluation.error : null;
   return (
-    <RigFormSettingsProvider value={{ units, engineError }}>
+    <RigFormSettingsProvider value={{ units, engineError, crewBench }}>
       <FormProvider {...form}>
         <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
           <form noValidate onSubmit={(event) => event.preventDefault()} aria-label="Rig inputs" className="min-w-0 space-y-4">

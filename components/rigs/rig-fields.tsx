@@ -1,6 +1,6 @@
 "use client";
 
-import { useState, type ReactNode } from "react";
+import { useId, useState, type ReactNode } from "react";
 import { get, useController, useFormContext, useFormState, type FieldErrors } from "react-hook-form";
 import { Field } from "@/components/ui/field";
 import { Select, type SelectOption } from "@/components/ui/select";
@@ -25,14 +25,33 @@ interface QuantityFieldProps {
   /** A blank box leaves the value out (the engine's default applies) instead of being an error. */
   optional?: boolean;
   hint?: ReactNode;
+  /** Values to offer as the person types (they may still type another). */
+  suggestions?: readonly string[];
+}
+
+/** The browser's list of values offered under a box; `list` is the id to give the box, undefined when there is nothing to offer. */
+function useSuggestions(suggestions: readonly string[] | undefined): { list: string | undefined; options: ReactNode } {
+  const id = useId();
+  if (!suggestions?.length) return { list: undefined, options: null };
+  return {
+    list: id,
+    options: (
+      <datalist id={id}>
+        {suggestions.map((value) => (
+          <option key={value} value={value} />
+        ))}
+      </datalist>
+    ),
+  };
 }
 
 /**
  * A number in the crew's units. The form holds SI (what the schema and the engine take); this box
  * converts at the edge and keeps the person's own text while they type.
  */
-export function QuantityField({ name, label, kind, optional = false, hint }: QuantityFieldProps) {
+export function QuantityField({ name, label, kind, optional = false, hint, suggestions }: QuantityFieldProps) {
   const { units } = useRigFormSettings();
+  const { list, options } = useSuggestions(suggestions);
   const {
     field: { ref, onChange, onBlur, value: held },
     fieldState,
@@ -44,31 +63,41 @@ export function QuantityField({ name, label, kind, optional = false, hint }: Qua
   const problem = useFieldProblem(name, fieldState.error?.message);
   const unit = unitLabel(kind, units);
   return (
-    <Field
-      label={unit ? `${label} (${unit})` : label}
-      inputMode="decimal"
-      autoComplete="off"
-      name={name}
-      ref={ref}
-      value={typed.text}
-      onBlur={onBlur}
-      onChange={(event) => {
-        const next = parseTyped(event.target.value, kind, units, optional);
-        setTyped({ text: event.target.value, value: next });
-        onChange(next);
-      }}
-      hint={hint}
-      error={allowedSentence(problem && messageInUnits(problem, kind, units))}
-    />
+    <>
+      <Field
+        label={unit ? `${label} (${unit})` : label}
+        inputMode="decimal"
+        autoComplete="off"
+        list={list}
+        name={name}
+        ref={ref}
+        value={typed.text}
+        onBlur={onBlur}
+        onChange={(event) => {
+          const next = parseTyped(event.target.value, kind, units, optional);
+          setTyped({ text: event.target.value, value: next });
+          onChange(next);
+        }}
+        hint={hint}
+        error={allowedSentence(problem && messageInUnits(problem, kind, units))}
+      />
+      {options}
+    </>
   );
 }
 
 /** A text box for a name in the rig input. */
-export function TextField({ name, label }: { name: RigPath; label: string }) {
+export function TextField({ name, label, suggestions, hint }: { name: RigPath; label: string; suggestions?: readonly string[]; hint?: ReactNode }) {
   const { register } = useFormContext<RigInputDraft>();
   const { errors } = useFormState<RigInputDraft>();
   const problem = useFieldProblem(name, messageAt(errors, name));
-  return <Field label={label} autoComplete="off" error={allowedSentence(problem)} {...register(name as never)} />;
+  const { list, options } = useSuggestions(suggestions);
+  return (
+    <>
+      <Field label={label} autoComplete="off" list={list} hint={hint} error={allowedSentence(problem)} {...register(name as never)} />
+      {options}
+    </>
+  );
 }
 
 /** A native select over fixed choices in the rig input. */

@@ -2,6 +2,7 @@
 
 import { createContext, useContext } from "react";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
+import type { SlipResult } from "@/physics";
 
 /** An input problem the engine found beyond the schema (e.g. a pretension above the MBS), to show beside its field. */
 export interface EngineFieldError {
@@ -12,9 +13,11 @@ export interface EngineFieldError {
 interface RigFormSettings {
   units: UnitSystem;
   engineError: EngineFieldError | null;
+  /** The crew's own slip bench: every brake check counts these results, and the brake fields offer their devices and diameters. */
+  crewBench: readonly SlipResult[];
 }
 
-const RigFormContext = createContext<RigFormSettings>({ units: "si", engineError: null });
+const RigFormContext = createContext<RigFormSettings>({ units: "si", engineError: null, crewBench: [] });
 
 export const RigFormSettingsProvider = RigFormContext.Provider;
 

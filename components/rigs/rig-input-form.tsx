@@ -4,8 +4,10 @@ import type { ReactNode } from "react";
 import { useController, useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/select";
-import { COMPONENT_CATEGORIES, type RigInputDraft } from "@/physics";
+import { COMPONENT_CATEGORIES, type RigInputDraft, type SlipResult } from "@/physics";
+import { formatCapacity } from "@/lib/rig-form/format";
 import { ChoiceField, GroupProblem, QuantityField, TextField } from "./rig-fields";
+import { useRigFormSettings } from "./rig-form-context";
 
 function Section({ title, children, problem }: { title: string; children: ReactNode; problem?: string }) {
   return (
@@ -201,22 +203,58 @@ function TensioningFields() {
   );
 }
 
-const RESULT_CHOICES = [
-  { value: "slipped", label: "Slipped at" },
-  { value: "held", label: "Held to (no slip)" },
-];
+const RESULT_LABELS: Record<SlipResult["result"], string> = { slipped: "Slipped at", held: "Held to (no slip)" };
+const RESULT_CHOICES = Object.entries(RESULT_LABELS).map(([value, label]) => ({ value, label }));
+
+/** The crew's slip results, read-only: they come from the slip bench and count in every brake check. */
+function CrewBenchResults() {
+  const { crewBench, units } = useRigFormSettings();
+  return (
+    <table className="w-full text-left text-sm">
+      <caption className="text-left font-semibold text-ink-900">From the crew&apos;s slip bench</caption>
+      <thead>
+        <tr className="border-b border-ink-200">
+          <th scope="col" className="py-1 pr-2">Device</th>
+          <th scope="col" className="py-1 pr-2">Rope (mm)</th>
+          <th scope="col" className="py-1 pr-2">Outcome</th>
+          <th scope="col" className="py-1">Force</th>
+        </tr>
+      </thead>
+      <tbody>
+        {crewBench.map((r, i) => (
+          <tr key={i} className="border-b border-ink-100">
+            <td className="py-1 pr-2">{r.device}</td>
+            <td className="py-1 pr-2 tabular-nums">{r.ropeDiameterMm}</td>
+            <td className="py-1 pr-2">{RESULT_LABELS[r.result]}</td>
+            <td className="py-1 tabular-nums">{formatCapacity(r.forceN, units)}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
 
 function BrakeFields() {
   const { getValues } = useFormContext<RigInputDraft>();
+  const { crewBench } = useRigFormSettings();
   const results = useFieldArray<RigInputDraft, "slipBench">({ name: "slipBench" });
+  const devices = [...new Set(crewBench.map((r) => r.device))].sort((a, b) => a.localeCompare(b));
+  const diameters = [...new Set(crewBench.map((r) => r.ropeDiameterMm))].sort((a, b) => a - b).map(String);
   return (
     <Section title="Brake" problem="slipBench">
       <Pair>
-        <TextField name="brake.device" label="Brake device" />
-        <QuantityField name="brake.ropeDiameterMm" label="Rope diameter (mm)" kind="plain" />
+        <TextField name="brake.device" label="Brake device" suggestions={devices} hint={devices.length ? "Offers the devices on the crew's slip bench." : undefined} />
+        <QuantityField
+          name="brake.ropeDiameterMm"
+          label="Rope diameter (mm)"
+          kind="plain"
+          suggestions={diameters}
+          hint={diameters.length ? "Offers the diameters on the crew's slip bench; another diameter is untested." : undefined}
+        />
       </Pair>
-      <h3 className="font-semibold">Slip results from the bench</h3>
       <p className="text-sm text-ink-600">Only results for the same device and rope diameter count. &quot;Held to&quot; is a lower bound: the test stopped without a slip.</p>
+      {crewBench.length ? <CrewBenchResults /> : null}
+      <h3 className="font-semibold">{crewBench.length ? "Further slip results, typed here (not on the crew's bench)" : "Slip results from the bench"}</h3>
       {results.fields.map((result, i) => (
         <Row key={result.id} onRemove={() => results.remove(i)} removeLabel={`Remove slip result ${i + 1}`} canRemove>
           <TextField name={`slipBench.${i}.device`} label={`Result ${i + 1} device`} />

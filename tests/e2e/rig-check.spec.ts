@@ -47,6 +47,29 @@ test("a rigger checks the worked example, changes it, sees bad input refused bes
   // Exactly, or to within a billionth where the browser's and Node's Math functions round differently in the last bit.
   await expect(page.getByText(/The server agrees: every figure matches the browser's/)).toBeVisible();
 
+  // The crew's own slip bench (invented demo data, seeds/02): the Talus Cam Brake slipped at 7.41 kN lowest on 10.5 mm rope.
+  await expect(page.getByRole("table", { name: "From the crew's slip bench" })).toContainText("Talus Cam Brake");
+  await page.getByLabel("Brake device", { exact: true }).fill("Talus Cam Brake");
+  await page.getByLabel("Rope diameter (mm)", { exact: true }).fill("10.5");
+  const brake = page.getByRole("region", { name: "Brake" });
+  await expect(brake).toContainText("lowest measured slip of 7.41 kN");
+  await expect(brake).toContainText("Holds");
+  // Force at the brake = line tension ÷ ideal MA; margin = lowest slip ÷ that force, cut to two decimals (common practice, no source).
+  // The page shows the tension rounded up to 0.01 kN and the slip to the nearest 0.01 kN, so the margin lies between the two cuts below.
+  const kN = async (label: string) => parseFloat((await figure(page, label).textContent())!);
+  const tension = await kN("Peak line tension at the tensioning anchor");
+  const advantage = parseInt((await figure(page, "Mechanical advantage, ideal").textContent())!, 10);
+  expect(advantage).toBe(6);
+  expect(Math.abs((await kN("Force at the brake at peak tension")) - tension / advantage)).toBeLessThanOrEqual(0.01 + 1e-9);
+  const cut = (m: number) => Math.floor(m * 100) / 100;
+  const margin = await kN("Margin (lowest slip ÷ force at the brake)");
+  expect(margin).toBeGreaterThanOrEqual(cut(((7.41 - 0.005) * advantage) / tension));
+  expect(margin).toBeLessThanOrEqual(cut(((7.41 + 0.005) * advantage) / (tension - 0.01)));
+  // A diameter the bench has not tested: no verdict is borrowed from another rope.
+  await page.getByLabel("Rope diameter (mm)", { exact: true }).fill("12");
+  await expect(brake).toContainText("Untested for this rope");
+  await expect(figure(page, "Margin (lowest slip ÷ force at the brake)")).toHaveText("no slip results");
+
   const serious = (await new AxeBuilder({ page }).analyze()).violations.filter((v) => v.impact === "serious" || v.impact === "critical");
   expect(serious.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`)).toEqual([]);
 });
