@@ -10,15 +10,16 @@ import { RigInputForm } from "./rig-input-form";
 import { LineResults } from "./line-results";
 import { ServerCheck } from "./server-check";
 
-/** What the browser's engine made of the current input: figures, or the reason there are none. */
+/** What the browser's engine made of the current input: figures (with the input's JSON, as the server would receive it), or the reason there are none. */
 export type Evaluation =
-  | { kind: "figures"; input: unknown; result: RigResult }
+  | { kind: "figures"; input: unknown; inputJson: string; result: RigResult }
   | { kind: "input"; error: EngineFieldError; message: string }
   | { kind: "solve"; message: string };
 
-function evaluate(input: unknown): Evaluation {
+function evaluate(inputJson: string): Evaluation {
+  const input: unknown = JSON.parse(inputJson);
   try {
-    return { kind: "figures", input, result: evaluateRig(input) };
+    return { kind: "figures", input, inputJson, result: evaluateRig(input) };
   } catch (error) {
     if (error instanceof RigInputError) return { kind: "input", error: { field: error.field, allowed: error.allowed }, message: error.message };
     if (error instanceof SolveError) return { kind: "solve", message: error.message };
@@ -33,11 +34,11 @@ function evaluate(input: unknown): Evaluation {
  */
 export function LineCheck({ startingRig, units, crewBench }: { startingRig: RigInputDraft; units: UnitSystem; crewBench: readonly SlipResult[] }) {
   const form = useForm<RigInputDraft, unknown, RigInput>({ resolver: zodResolver(RigInputSchema), mode: "onChange", defaultValues: startingRig });
-  const watched = useWatch({ control: form.control });
-  const values = { ...watched, slipBench: [...crewBench, ...(watched.slipBench ?? [])] };
-  // The JSON the server would receive: the browser evaluates exactly that, so both see the same input.
-  const inputJson = useDeferredValue(JSON.stringify(values));
-  const evaluation = useMemo(() => evaluate(JSON.parse(inputJson)), [inputJson]);
+  const values = useWatch({ control: form.control });
+  // The JSON the server would receive, once per change: the browser evaluates exactly that, so both see the same input.
+  const inputJson = useMemo(() => JSON.stringify({ ...values, slipBench: [...crewBench, ...(values.slipBench ?? [])] }), [values, crewBench]);
+  const evaluatedJson = useDeferredValue(inputJson);
+  const evaluation = useMemo(() => evaluate(evaluatedJson), [evaluatedJson]);
   const engineError = evaluation.kind === "input" ? evaluation.error : null;
   return (
     <RigFormSettingsProvider value={{ units, engineError, crewBench }}>
@@ -52,7 +53,7 @@ export function LineCheck({ startingRig, units, crewBench }: { startingRig: RigI
           </form>
           <div id="figures" className="min-w-0 scroll-mt-4 space-y-6">
             <ServerCheck evaluation={evaluation} />
-            <LineResults evaluation={evaluation} units={units} stale={inputJson !== JSON.stringify(values)} />
+            <LineResults evaluation={evaluation} units={units} stale={evaluatedJson !== inputJson} />
           </div>
         </div>
       </FormProvider>

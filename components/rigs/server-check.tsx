@@ -21,7 +21,7 @@ const MOST_DIFFERENCES_SHOWN = 8;
 export function ServerCheck({ evaluation }: { evaluation: Evaluation }) {
   const [checked, setChecked] = useState<Checked | null>(null);
   const [busy, setBusy] = useState(false);
-  const current = evaluation.kind === "figures" ? JSON.stringify(evaluation.input) : null;
+  const current = evaluation.kind === "figures" ? evaluation.inputJson : null;
   const outcome = checked && checked.input === current ? checked.outcome : null;
 
   async function check() {
