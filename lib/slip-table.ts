@@ -1,4 +1,5 @@
 import type { SlipResult } from "@/physics";
+import { forceDigits } from "./force-format";
 
 // The slip table: for each device and rope diameter, what the crew's bench has shown. A held-to result
 // is a lower bound and never counts as a slip load.
@@ -62,10 +63,10 @@ export function buildSlipTable(tests: readonly SlipTableTest[]): SlipTable {
 export const toSlipResults = (tests: readonly SlipTableTest[]): SlipResult[] =>
   tests.map((t) => ({ device: t.deviceName, ropeDiameterMm: t.ropeDiameterMm, result: t.result, forceN: t.forceN }));
 
-/** The table as CSV, one row per cell, forces in kN; held-only cells give their bound, never a slip load. */
+/** The table as CSV, one row per cell, forces in kN cut down to 0.01 kN; held-only cells give their bound, never a slip load. */
 export function slipTableCsv(table: SlipTable): string {
   const names = new Map(table.devices.map((d) => [d.id, d.name]));
-  const kN = (n: number | null) => (n === null ? "" : (n / 1000).toFixed(2));
+  const kN = (n: number | null) => (n === null ? "" : forceDigits(n, "kN"));
   const quote = (text: string) => `"${text.replace(/"/g, '""')}"`;
   const rows = [...table.cells]
     .sort((a, b) => names.get(a.deviceId)!.localeCompare(names.get(b.deviceId)!) || a.ropeDiameterMm - b.ropeDiameterMm)

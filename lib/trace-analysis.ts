@@ -1,4 +1,5 @@
-import { detectSlip, ENGINE_VERSION, fromNewtons, type ForceUnit, type SlipOnset } from "@/physics";
+import { detectSlip, ENGINE_VERSION, type ForceUnit, type SlipOnset } from "@/physics";
+import { formatForce } from "./force-format";
 import { RequestError } from "./http-errors";
 import { benchRangeIn, BENCH_FORCE_RANGE_N } from "./validations/slip-tests";
 import type { ParsedTrace } from "./trace-csv";
@@ -49,8 +50,7 @@ export function analyseTrace(trace: ParsedTrace, unit: ForceUnit, dropN: number,
   let peak = -Infinity;
   for (const f of trace.force) if (f > peak) peak = f;
   if (peak < BENCH_FORCE_RANGE_N.min || peak > BENCH_FORCE_RANGE_N.max) {
-    const shown = Number(fromNewtons(peak, unit).toPrecision(4));
-    throw new RequestError(422, `The trace peaks at ${shown} ${unit}, outside what a slip bench measures (${benchRangeIn(unit)}): check the unit you chose.`);
+    throw new RequestError(422, `The trace peaks at ${formatForce(peak, unit)}, outside what a slip bench measures (${benchRangeIn(unit)}): check the unit you chose.`);
   }
   const onset = detectSlip(trace, dropN, pullEndS);
   const n = trace.time.length;

@@ -1,4 +1,5 @@
 import type { SlipTableTest } from "@/lib/slip-table";
+import { fromNewtons } from "@/physics";
 import { linearScale, niceTicks } from "./scale";
 
 const W = 720;
@@ -13,7 +14,7 @@ const SERIES = ["#1c4e91", "#b42318", "#17704f", "#5c3d00", "#6d3a9c", "#0e6b78"
  */
 export function SlipLoadChart({ id, tests, devices }: { id: string; tests: SlipTableTest[]; devices: { id: string; name: string }[] }) {
   const diameters = tests.map((t) => t.ropeDiameterMm);
-  const forces = tests.map((t) => t.forceN / 1000);
+  const forces = tests.map((t) => fromNewtons(t.forceN, "kN"));
   const x = linearScale([Math.min(...diameters) - 0.5, Math.max(...diameters) + 0.5], [M.left, W - M.right]);
   const y = linearScale([0, Math.max(...forces) * 1.1], [H - M.bottom, M.top]);
   return (
@@ -35,15 +36,15 @@ export function SlipLoadChart({ id, tests, devices }: { id: string; tests: SlipT
         const own = tests.filter((t) => t.deviceId === device.id);
         const lowest = [...new Set(own.filter((t) => t.result === "slipped").map((t) => t.ropeDiameterMm))]
           .sort((a, b) => a - b)
-          .map((d) => [d, Math.min(...own.filter((t) => t.result === "slipped" && t.ropeDiameterMm === d).map((t) => t.forceN / 1000))] as const);
+          .map((d) => [d, Math.min(...own.filter((t) => t.result === "slipped" && t.ropeDiameterMm === d).map((t) => fromNewtons(t.forceN, "kN")))] as const);
         return (
           <g key={device.id}>
             {lowest.length > 1 ? <path d={lowest.map(([d, f], j) => `${j ? "L" : "M"}${x(d)},${y(f)}`).join("")} fill="none" stroke={colour} strokeWidth="1.5" /> : null}
             {own.map((t) =>
               t.result === "slipped" ? (
-                <circle key={t.id} cx={x(t.ropeDiameterMm)} cy={y(t.forceN / 1000)} r="5" fill={colour} />
+                <circle key={t.id} cx={x(t.ropeDiameterMm)} cy={y(fromNewtons(t.forceN, "kN"))} r="5" fill={colour} />
               ) : (
-                <path key={t.id} d={`M${x(t.ropeDiameterMm)},${y(t.forceN / 1000) - 7}l6,10h-12z`} fill="white" stroke={colour} strokeWidth="2" />
+                <path key={t.id} d={`M${x(t.ropeDiameterMm)},${y(fromNewtons(t.forceN, "kN")) - 7}l6,10h-12z`} fill="white" stroke={colour} strokeWidth="2" />
               ),
             )}
             <circle cx={W - M.right + 20} cy={M.top + 10 + i * 22} r="5" fill={colour} />

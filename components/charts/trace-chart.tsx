@@ -1,3 +1,4 @@
+import { formatForce } from "@/lib/force-format";
 import { fromNewtons, type ForceUnit } from "@/physics";
 import { linearScale, niceTicks } from "./scale";
 
@@ -22,7 +23,7 @@ export function TraceChart({ time, force, unit, onset }: TraceChartProps) {
   const y = linearScale([bottom, top * 1.05], [H - M.bottom, M.top]);
   const path = values.map((v, i) => `${i ? "L" : "M"}${x(time[i]).toFixed(1)},${y(v).toFixed(1)}`).join("");
   const onsetValue = fromNewtons(onset.forceN, unit);
-  const label = `${onset.kind === "slipped" ? "Slip onset" : "Held to"} ${onsetValue.toFixed(unit === "kN" ? 2 : 0)} ${unit} at ${onset.timeS.toFixed(1)} s`;
+  const label = `${onset.kind === "slipped" ? "Slip onset" : "Held to"} ${formatForce(onset.forceN, unit)} at ${onset.timeS.toFixed(1)} s`;
   return (
     <figure className="rounded-panel border border-ink-200 bg-white p-2">
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={`Trace chart: force against time. ${label}.`} className="h-auto w-full">

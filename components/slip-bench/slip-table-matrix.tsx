@@ -1,10 +1,11 @@
 import Link from "next/link";
 import { cellKey, type SlipTable } from "@/lib/slip-table";
-import { kN } from "./force-format";
+import { formatForce } from "@/lib/force-format";
 
 /**
  * Devices down, rope diameters across. A cell gives the lowest slip load with the number of tests and
  * the spread of the slips; a cell with only held-to results gives "held to ≥ F", a lower bound, never a slip.
+ * Loads are cut down to 0.01 kN, never rounded up.
  */
 export function SlipTableMatrix({ table, cellHref }: { table: SlipTable; cellHref?: (deviceId: string, diameter: number) => string }) {
   const cells = new Map(table.cells.map((c) => [cellKey(c.deviceId, c.ropeDiameterMm), c]));
@@ -41,14 +42,14 @@ export function SlipTableMatrix({ table, cellHref }: { table: SlipTable; cellHre
                 }
                 const main =
                   cell.lowestSlipN !== null ? (
-                    <span className="font-semibold">{kN(cell.lowestSlipN)}</span>
+                    <span className="font-semibold">{formatForce(cell.lowestSlipN, "kN")}</span>
                   ) : (
-                    <span className="font-semibold text-caution-800">held to ≥ {kN(cell.highestHeldN!)}</span>
+                    <span className="font-semibold text-caution-800">held to ≥ {formatForce(cell.highestHeldN!, "kN")}</span>
                   );
                 const detail = [
                   `${cell.tests} test${cell.tests === 1 ? "" : "s"}`,
-                  cell.spreadN !== null ? `spread ${kN(cell.spreadN)}` : null,
-                  cell.lowestSlipN !== null && cell.highestHeldN !== null ? `held to ${kN(cell.highestHeldN)}` : null,
+                  cell.spreadN !== null ? `spread ${formatForce(cell.spreadN, "kN")}` : null,
+                  cell.lowestSlipN !== null && cell.highestHeldN !== null ? `held to ${formatForce(cell.highestHeldN, "kN")}` : null,
                 ]
                   .filter(Boolean)
                   .join(" · ");
@@ -61,7 +62,7 @@ export function SlipTableMatrix({ table, cellHref }: { table: SlipTable; cellHre
                 return (
                   <td key={d} className="px-4 py-3 text-right tabular-nums" data-cell={name}>
                     {cellHref ? (
-                      <Link href={cellHref(device.id, d)} aria-label={`${device.name} on ${d.toFixed(1)} mm: ${cell.lowestSlipN !== null ? `lowest slip ${kN(cell.lowestSlipN)}` : `held to at least ${kN(cell.highestHeldN!)}`}, ${detail}`} className="block no-underline">
+                      <Link href={cellHref(device.id, d)} aria-label={`${device.name} on ${d.toFixed(1)} mm: ${cell.lowestSlipN !== null ? `lowest slip ${formatForce(cell.lowestSlipN, "kN")}` : `held to at least ${formatForce(cell.highestHeldN!, "kN")}`}, ${detail}`} className="block no-underline">
                         {content}
                       </Link>
                     ) : (

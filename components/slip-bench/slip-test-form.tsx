@@ -11,9 +11,10 @@ import { Field, FieldFrame, controlClasses } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { useToast } from "@/components/ui/toast";
 import { TraceChart } from "@/components/charts/trace-chart";
+import { forceIn, formatForce } from "@/lib/force-format";
 import type { TraceAnalysis } from "@/lib/trace-analysis";
 import { DEFAULT_DROP, FORCE_UNITS, SLIP_RESULTS, SLIP_RESULT_LABELS, SlipTestSchema, type SlipTest, type SlipTestInput } from "@/lib/validations/slip-tests";
-import { fromNewtons, type ForceUnit } from "@/physics";
+import type { ForceUnit } from "@/physics";
 
 export interface DeviceOption {
   id: string;
@@ -67,7 +68,7 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
     setAnalysis(found);
     setValue("traceUploadId", (answer.body.upload as { id: string }).id);
     setValue("result", found.onset.kind);
-    setValue("force", Number(fromNewtons(found.onset.forceN, found.unit).toPrecision(4)));
+    setValue("force", forceIn(found.onset.forceN, found.unit));
     setValue("forceUnit", found.unit);
   }
 
@@ -118,7 +119,7 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
             <p>
               Read {analysis.rows.toLocaleString("en")} rows over {analysis.durationS.toFixed(1)} s (time from “{analysis.timeColumn}”, force from “{analysis.forceColumn}”).{" "}
               <strong>
-                Detected: {analysis.onset.kind === "slipped" ? "slipped at" : "held to"} {fromNewtons(analysis.onset.forceN, analysis.unit).toPrecision(4)} {analysis.unit}
+                Detected: {analysis.onset.kind === "slipped" ? "slipped at" : "held to"} {formatForce(analysis.onset.forceN, analysis.unit)}
               </strong>
               . Check it against the chart, then confirm it below or correct it and say why in the notes.
             </p>

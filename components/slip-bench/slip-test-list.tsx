@@ -3,12 +3,11 @@
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
 import { SortableTable } from "@/components/ui/sortable-table";
-import { fromNewtons } from "@/physics";
+import { formatForce } from "@/lib/force-format";
 import { isCorrection } from "@/lib/slip-table";
 import type { SlipTestRow } from "@/db/slip-tests";
 
 const detectedOf = (t: SlipTestRow) => (t.detectedResult ? { kind: t.detectedResult, forceN: t.detectedForceN! } : null);
-const entered = (t: SlipTestRow) => `${Number(fromNewtons(t.forceN, t.forceUnit).toPrecision(4))} ${t.forceUnit}`;
 
 export function SlipTestList({ tests }: { tests: SlipTestRow[] }) {
   const devices = [...new Map(tests.map((t) => [t.deviceId, t.deviceName]))].map(([value, label]) => ({ value, label }));
@@ -27,7 +26,7 @@ export function SlipTestList({ tests }: { tests: SlipTestRow[] }) {
         { key: "date", header: "Tested on", sortBy: (t) => t.testedOn, cell: (t) => <Link href={`/slip-bench/tests/${t.id}`}>{t.testedOn}</Link> },
         { key: "device", header: "Device", sortBy: (t) => t.deviceName, cell: (t) => t.deviceName },
         { key: "rope", header: "Rope", sortBy: (t) => t.ropeDiameterMm, cell: (t) => `${t.ropeDiameterMm.toFixed(1)} mm${t.ropeModelName ? ` (${t.ropeModelName})` : ""}` },
-        { key: "result", header: "Result", sortBy: (t) => t.forceN, align: "right", cell: (t) => `${t.result === "slipped" ? "slipped at" : "held to"} ${entered(t)}` },
+        { key: "result", header: "Result", sortBy: (t) => t.forceN, align: "right", cell: (t) => `${t.result === "slipped" ? "slipped at" : "held to"} ${formatForce(t.forceN, t.forceUnit)}` },
         { key: "trace", header: "Trace", cell: (t) => (t.traceUploadId ? (isCorrection(detectedOf(t), t.result, t.forceN) ? "corrected" : "confirmed") : "—") },
         { key: "who", header: "Who", sortBy: (t) => t.testerName, cell: (t) => t.testerName },
       ]}

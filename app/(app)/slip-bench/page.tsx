@@ -50,7 +50,7 @@ export default async function SlipBenchPage({ searchParams }: { searchParams: Pr
               </a>
             </div>
             <p className="max-w-prose text-ink-600">
-              Each cell: the lowest load at which the device slipped on that rope, the number of tests and the spread of the slips. “Held to ≥” means no test slipped: the slip load is at least that, and was never measured.
+              Each cell: the lowest load at which the device slipped on that rope, the number of tests and the spread of the slips. “Held to ≥” means no test slipped: the slip load is at least that, and was never measured. Loads are cut down to 0.01 kN, never rounded up.
             </p>
             <SlipTableMatrix table={table} cellHref={(id, d) => `/slip-bench?device=${id}&diameter=${d}#tests-heading`} />
           </section>

@@ -21,7 +21,7 @@ export default async function SharedSlipTablePage({ params }: { params: Promise<
         <p className="font-bold text-spruce-800">Spanwright</p>
         <h1>Slip table of {crew.name}</h1>
         <p className="mt-1 max-w-prose text-ink-600">
-          Shared read-only by the crew. Each cell gives the lowest load at which the device slipped on that rope diameter; “held to ≥” is a lower bound: no test slipped.
+          Shared read-only by the crew. Each cell gives the lowest load at which the device slipped on that rope diameter; “held to ≥” is a lower bound: no test slipped. Loads are cut down to 0.01 kN, never rounded up.
         </p>
       </header>
       {tests.length === 0 ? (

@@ -4,12 +4,12 @@ import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/page-header";
 import { TraceChart } from "@/components/charts/trace-chart";
 import { authorizePage } from "@/lib/authz";
+import { formatForce } from "@/lib/force-format";
 import { isCorrection } from "@/lib/slip-table";
 import type { TraceAnalysis } from "@/lib/trace-analysis";
 import { UUID_PATTERN } from "@/lib/validations/ids";
 import { findSlipTest } from "@/db/slip-tests";
 import { traceAnalysis } from "@/db/uploads";
-import { fromNewtons } from "@/physics";
 
 export const metadata: Metadata = { title: "Slip test" };
 
@@ -19,7 +19,7 @@ export default async function SlipTestPage({ params }: { params: Promise<{ id: s
   const test = UUID_PATTERN.test(id) ? await findSlipTest(crew.id, id) : null;
   if (!test) notFound();
   const analysis = test.traceUploadId ? await traceAnalysis<TraceAnalysis>(crew.id, test.traceUploadId) : null;
-  const shown = (n: number) => `${Number(fromNewtons(n, test.forceUnit).toPrecision(4))} ${test.forceUnit}`;
+  const shown = (n: number) => formatForce(n, test.forceUnit);
   const corrected = analysis ? isCorrection(analysis.onset, test.result, test.forceN) : false;
   return (
     <>
