@@ -2,9 +2,8 @@
 
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { send } from "@/lib/client-requests";
+import { callApi } from "@/components/forms/call-api";
 import { judgeAgreement, SAME_FIGURE, type Difference } from "@/lib/rig-form/compare-results";
-import type { RigResult } from "@/physics";
 import type { Evaluation } from "./line-check";
 
 type Outcome = { kind: "agrees"; version: string; exact: boolean; largestRelative: number } | { kind: "differs"; differences: Difference[] } | { kind: "refused"; message: string };
@@ -27,14 +26,14 @@ export function ServerCheck({ evaluation }: { evaluation: Evaluation }) {
   async function check() {
     if (evaluation.kind !== "figures" || current === null) return;
     setBusy(true);
-    const answer = await send<RigResult>("/api/compute", "POST", evaluation.input);
+    const answer = await callApi("POST", "/api/compute", evaluation.input);
     // Compare JSON with JSON: what the browser would have sent back is what the server did send.
     const browser: unknown = JSON.parse(JSON.stringify(evaluation.result));
     let next: Outcome;
     if (answer.ok) {
-      const agreement = judgeAgreement(browser, answer.data);
+      const agreement = judgeAgreement(browser, answer.body);
       next = agreement.agrees
-        ? { kind: "agrees", version: answer.data.engineVersion, exact: agreement.exact, largestRelative: agreement.largestRelative }
+        ? { kind: "agrees", version: String(answer.body.engineVersion), exact: agreement.exact, largestRelative: agreement.largestRelative }
         : { kind: "differs", differences: agreement.disagreements };
     } else {
       next = { kind: "refused", message: Object.values(answer.fieldErrors)[0] ?? answer.error };
