@@ -1,9 +1,21 @@
+import { notFound } from "next/navigation";
+import { z } from "zod";
 import { RequestError } from "@/lib/http-errors";
 
-export const UUID_PATTERN = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+const Uuid = z.uuid();
+
+/** True when the value is a uuid (RFC 9562, as zod checks it): only such a value can name a row. */
+export const isUuid = (value: unknown): value is string => Uuid.safeParse(value).success;
 
 /** A row id from the URL: anything that is not a uuid names no row, so it answers 404 like a missing one. */
 export function rowId(id: string, what: string): string {
-  if (!UUID_PATTERN.test(id)) throw new RequestError(404, `No such ${what} in this crew.`);
+  if (!isUuid(id)) throw new RequestError(404, `No such ${what} in this crew.`);
   return id;
+}
+
+/** A page's row from its URL id: the crew's own row, or the not-found page when the id is no uuid or names none of its rows. */
+export async function crewRowOrNotFound<Row>(find: (crewId: string, id: string) => Promise<Row | null>, crewId: string, id: string): Promise<Row> {
+  const row = isUuid(id) ? await find(crewId, id) : null;
+  if (!row) notFound();
+  return row;
 }

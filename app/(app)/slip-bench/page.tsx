@@ -12,7 +12,7 @@ import { PublishLink } from "@/components/slip-bench/publish-link";
 import { authorizePage } from "@/lib/authz";
 import { can } from "@/lib/roles";
 import { buildSlipTable } from "@/lib/slip-table";
-import { UUID_PATTERN } from "@/lib/validations/ids";
+import { isUuid } from "@/lib/validations/ids";
 import { listSlipTests, slipTableLinkOf } from "@/db/slip-tests";
 
 export const metadata: Metadata = { title: "Slip bench" };
@@ -27,7 +27,7 @@ export default async function SlipBenchPage({ searchParams }: { searchParams: Pr
   const { crew, role } = await authorizePage("slip.read", "/slip-bench");
   const tests = await listSlipTests(crew.id);
   const table = buildSlipTable(tests);
-  const cellChosen = device && UUID_PATTERN.test(device) && diameter !== undefined && Number.isFinite(Number(diameter));
+  const cellChosen = device && isUuid(device) && diameter !== undefined && Number.isFinite(Number(diameter));
   const shownTests = cellChosen ? tests.filter((t) => t.deviceId === device && t.ropeDiameterMm === Number(diameter)) : tests;
   const chosenName = cellChosen ? table.devices.find((d) => d.id === device)?.name : null;
   const record = can(role, "slip.write") ? (

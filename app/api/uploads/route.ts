@@ -5,7 +5,7 @@ import { putObject } from "@/lib/storage";
 import { checkFileType, randomStorageKey, readUploadForm, sha256Hex } from "@/lib/uploads";
 import { findItem, findModel } from "@/db/kit";
 import { insertUpload } from "@/db/uploads";
-import { UUID_PATTERN } from "@/lib/validations/ids";
+import { isUuid } from "@/lib/validations/ids";
 
 /** Photos of an item or a model, and manuals (PDF) of a model. Traces go through the slip bench. */
 export const POST = crewRoute("kit.write", async ({ crew, user }, request) => {
@@ -19,8 +19,8 @@ export const POST = crewRoute("kit.write", async ({ crew, user }, request) => {
   const modelId = form.get("modelId");
   const owner =
     typeof itemId === "string" && itemId !== ""
-      ? { itemId: UUID_PATTERN.test(itemId) && (await findItem(crew.id, itemId)) ? itemId : null }
-      : { modelId: typeof modelId === "string" && UUID_PATTERN.test(modelId) && (await findModel(crew.id, modelId)) ? modelId : null };
+      ? { itemId: isUuid(itemId) && (await findItem(crew.id, itemId)) ? itemId : null }
+      : { modelId: isUuid(modelId) && (await findModel(crew.id, modelId)) ? modelId : null };
   if (!owner.itemId && !owner.modelId) throw new RequestError(404, "Attach the file to an item or a gear model of this crew (itemId or modelId).");
   if (purpose === "manual" && owner.itemId) throw new RequestError(400, "Manuals belong to a gear model, not to one item: send modelId.");
   const contentType = checkFileType(purpose, file.name, bytes);

@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/page-header";
 import { buttonClasses } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
@@ -14,7 +13,7 @@ import { StatusBadge } from "@/components/kit/status-badge";
 import { authorizePage } from "@/lib/authz";
 import { can } from "@/lib/roles";
 import { GEAR_KIND_LABELS, INSPECTION_RESULT_LABELS } from "@/lib/validations/kit";
-import { UUID_PATTERN } from "@/lib/validations/ids";
+import { crewRowOrNotFound } from "@/lib/validations/ids";
 import { findItem, listInspections } from "@/db/kit";
 import { listUploads } from "@/db/uploads";
 
@@ -23,8 +22,7 @@ export const metadata: Metadata = { title: "Item" };
 export default async function GearItemPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const { crew, role } = await authorizePage("kit.read", `/kit/items/${id}`);
-  const item = UUID_PATTERN.test(id) ? await findItem(crew.id, id) : null;
-  if (!item) notFound();
+  const item = await crewRowOrNotFound(findItem, crew.id, id);
   const [inspections, photos] = await Promise.all([listInspections(crew.id, id), listUploads(crew.id, { itemId: id })]);
   const writer = can(role, "kit.write");
   return (

@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/page-header";
 import { buttonClasses } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
@@ -16,7 +15,7 @@ import { StatusBadge } from "@/components/kit/status-badge";
 import { authorizePage } from "@/lib/authz";
 import { can } from "@/lib/roles";
 import { GEAR_KIND_LABELS } from "@/lib/validations/kit";
-import { UUID_PATTERN } from "@/lib/validations/ids";
+import { crewRowOrNotFound } from "@/lib/validations/ids";
 import { findModel, listItems } from "@/db/kit";
 import { listUploads } from "@/db/uploads";
 
@@ -25,8 +24,7 @@ export const metadata: Metadata = { title: "Gear model" };
 export default async function GearModelPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const { crew, role } = await authorizePage("kit.read", `/kit/models/${id}`);
-  const model = UUID_PATTERN.test(id) ? await findModel(crew.id, id) : null;
-  if (!model) notFound();
+  const model = await crewRowOrNotFound(findModel, crew.id, id);
   const [items, files] = await Promise.all([listItems(crew.id, id), listUploads(crew.id, { modelId: id })]);
   const writer = can(role, "kit.write");
   return (

@@ -1,13 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/page-header";
 import { TraceChart } from "@/components/charts/trace-chart";
 import { authorizePage } from "@/lib/authz";
 import { formatForce } from "@/lib/force-format";
 import { isCorrection } from "@/lib/slip-table";
 import type { TraceAnalysis } from "@/lib/trace-analysis";
-import { UUID_PATTERN } from "@/lib/validations/ids";
+import { crewRowOrNotFound } from "@/lib/validations/ids";
 import { findSlipTest } from "@/db/slip-tests";
 import { traceAnalysis } from "@/db/uploads";
 
@@ -16,8 +15,7 @@ export const metadata: Metadata = { title: "Slip test" };
 export default async function SlipTestPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const { crew } = await authorizePage("slip.read", `/slip-bench/tests/${id}`);
-  const test = UUID_PATTERN.test(id) ? await findSlipTest(crew.id, id) : null;
-  if (!test) notFound();
+  const test = await crewRowOrNotFound(findSlipTest, crew.id, id);
   const analysis = test.traceUploadId ? await traceAnalysis<TraceAnalysis>(crew.id, test.traceUploadId) : null;
   const shown = (n: number) => formatForce(n, test.forceUnit);
   const corrected = analysis ? isCorrection(analysis.onset, test.result, test.forceN) : false;

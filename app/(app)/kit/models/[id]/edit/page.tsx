@@ -1,9 +1,8 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/page-header";
 import { GearModelForm } from "@/components/kit/gear-model-form";
 import { authorizePage } from "@/lib/authz";
-import { UUID_PATTERN } from "@/lib/validations/ids";
+import { crewRowOrNotFound } from "@/lib/validations/ids";
 import type { GearModelInput } from "@/lib/validations/kit";
 import { findModel } from "@/db/kit";
 
@@ -12,8 +11,7 @@ export const metadata: Metadata = { title: "Edit gear model" };
 export default async function EditGearModelPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const { crew } = await authorizePage("kit.write", `/kit/models/${id}/edit`);
-  const model = UUID_PATTERN.test(id) ? await findModel(crew.id, id) : null;
-  if (!model) notFound();
+  const model = await crewRowOrNotFound(findModel, crew.id, id);
   return (
     <>
       <PageHeader title={`Edit ${model.name}`} lead="Changes apply to every item of this model; plans already signed off keep the specs they were checked with." />
