@@ -1,6 +1,7 @@
 import { formatDepth, formatDistance, formatLoad } from "@/lib/rig-form/format";
 import { toShown, unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
 import type { Sweep, SweepPoint } from "@/physics";
+import { linearScale } from "@/components/charts/scale";
 
 const WIDTH = 640;
 const PANEL = 210;
@@ -21,9 +22,9 @@ function SweepPanel({ title, kind, series, sweep, units, offset }: { title: stri
   const values = series.flatMap((s) => sweep.points.map(s.value));
   const low = Math.min(...values);
   const high = Math.max(...values);
-  const x = (metres: number) => PAD.left + (metres / span) * (WIDTH - PAD.left - PAD.right);
-  const y = (v: number) => offset + PAD.top + (1 - (v - low) / (high - low || 1)) * (PANEL - PAD.top - PAD.bottom);
   const bottom = offset + PANEL - PAD.bottom;
+  const x = linearScale([0, span], [PAD.left, WIDTH - PAD.right]);
+  const y = linearScale([low, high], [bottom, offset + PAD.top]);
   return (
     <g>
       <text x={8} y={offset + 22} className="fill-ink-800 text-[22px] font-semibold">
