@@ -4,10 +4,13 @@ import { PageHeader } from "@/components/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { buttonClasses } from "@/components/ui/button";
 import { CautionNotice } from "@/components/caution-notice";
+import { authorizePage } from "@/lib/authz";
 
 export const metadata: Metadata = { title: "Rigs" };
 
-export default function RigsPage() {
+export default async function RigsPage() {
+  // The layout's check does not cover a page: each page that shows crew pages checks access itself.
+  await authorizePage("rig.read", "/rigs");
   return (
     <>
       <PageHeader title="Rigs" lead="Plans for a line on a real span: drafted by a rigger, checked and signed off by the crew lead." />
