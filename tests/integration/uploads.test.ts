@@ -48,6 +48,7 @@ describe("photos and manuals", () => {
     expect(served.status).toBe(200);
     expect(served.headers.get("content-type")).toBe("image/png");
     expect(served.headers.get("x-content-type-options")).toBe("nosniff");
+    expect(served.headers.get("content-security-policy")).toBe("sandbox");
     expect(Buffer.from(await served.arrayBuffer()).equals(PNG)).toBe(true);
     expect((await as.outsider.get(`/api/uploads/${upload.id}`)).status).toBe(404);
     const detail = await (await as.member.get(`/api/kit/items/${itemId}`)).json();

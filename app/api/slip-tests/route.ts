@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { crewRoute, readJson } from "@/lib/api";
+import { crewRoute, parseBody } from "@/lib/api";
 import { RequestError } from "@/lib/http-errors";
 import { rowId } from "@/lib/validations/ids";
 import { SlipTestSchema } from "@/lib/validations/slip-tests";
@@ -23,7 +23,7 @@ export const GET = crewRoute("slip.read", async ({ crew }, request) => {
 const fieldError = (field: string, message: string) => new RequestError(400, message, { [field]: message });
 
 export const POST = crewRoute("slip.write", async ({ crew, user }, request) => {
-  const test = SlipTestSchema.parse(await readJson(request));
+  const test = await parseBody(request, SlipTestSchema);
   const device = await findModel(crew.id, test.deviceModelId);
   if (!device || !(SLIP_DEVICE_KINDS as readonly string[]).includes(device.kind)) {
     throw fieldError("deviceModelId", "Choose a brake or line grip of this crew's Kit as the device tested.");

@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { crewRoute, readJson } from "@/lib/api";
+import { crewRoute, parseBody } from "@/lib/api";
 import { RequestError } from "@/lib/http-errors";
 import { rowId } from "@/lib/validations/ids";
 import { GearItemSchema } from "@/lib/validations/kit";
@@ -11,7 +11,7 @@ export const GET = crewRoute("kit.read", async ({ crew }, request) => {
 });
 
 export const POST = crewRoute("kit.write", async ({ crew }, request) => {
-  const item = GearItemSchema.parse(await readJson(request));
+  const item = await parseBody(request, GearItemSchema);
   const created = await createItem(crew.id, item);
   if (created === "model_not_found") throw new RequestError(404, "No such gear model in this crew.");
   if (created === "model_retired") throw new RequestError(409, "This model is retired: no new items of it can be added.");

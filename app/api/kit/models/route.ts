@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { crewRoute, readJson } from "@/lib/api";
+import { crewRoute, parseBody } from "@/lib/api";
 import { RequestError } from "@/lib/http-errors";
 import { GEAR_KINDS, GearModelSchema, type GearKind } from "@/lib/validations/kit";
 import { createModel, listModels } from "@/db/kit";
@@ -13,6 +13,6 @@ export const GET = crewRoute("kit.read", async ({ crew }, request) => {
 });
 
 export const POST = crewRoute("kit.write", async ({ crew }, request) => {
-  const model = GearModelSchema.parse(await readJson(request));
+  const model = await parseBody(request, GearModelSchema);
   return NextResponse.json({ model: await createModel(crew.id, model) }, { status: 201 });
 });

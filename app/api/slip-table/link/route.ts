@@ -1,11 +1,12 @@
 import { NextResponse } from "next/server";
 import { crewRoute } from "@/lib/api";
+import { appOrigin } from "@/lib/app-origin";
 import { publishSlipTable, revokeSlipTable } from "@/db/slip-tests";
 
 /** Publishes a read-only link to the slip table (any earlier link stops working). The token is shown only now. */
 export const POST = crewRoute("slip.publish", async ({ crew, user }, request) => {
   const token = await publishSlipTable(crew.id, user.id);
-  return NextResponse.json({ token, url: new URL(`/shared/slip-table/${token}`, process.env.APP_ORIGIN ?? request.nextUrl.origin).toString() }, { status: 201 });
+  return NextResponse.json({ token, url: new URL(`/shared/slip-table/${token}`, appOrigin(request)).toString() }, { status: 201 });
 });
 
 export const DELETE = crewRoute("slip.publish", async ({ crew }) => {

@@ -4,7 +4,10 @@ import { getObjectStream } from "@/lib/storage";
 import { rowId } from "@/lib/validations/ids";
 import { findUpload } from "@/db/uploads";
 
-/** A crew's own file, streamed from S3; another crew's answers 404. */
+/**
+ * A crew's own file, streamed from S3; another crew's answers 404. Served sandboxed and never sniffed, so an
+ * uploaded file that is really a page or a script cannot run as one of ours.
+ */
 export const GET = crewRoute<{ id: string }>("kit.read", async ({ crew }, _request, { id }) => {
   const upload = await findUpload(crew.id, rowId(id, "file"));
   if (!upload) throw new RequestError(404, "No such file in this crew.");
@@ -17,6 +20,7 @@ export const GET = crewRoute<{ id: string }>("kit.read", async ({ crew }, _reque
       "content-type": upload.contentType,
       "content-length": String(upload.byteSize),
       "content-disposition": `${disposition}; filename="${upload.fileName.replace(/[^\w.\- ]/g, "_")}"`,
+      "content-security-policy": "sandbox",
       "x-content-type-options": "nosniff",
       "cache-control": "private, max-age=3600",
       "x-sha256": upload.sha256,

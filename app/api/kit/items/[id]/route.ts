@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { crewRoute, readJson } from "@/lib/api";
+import { crewRoute, parseBody } from "@/lib/api";
 import { RequestError } from "@/lib/http-errors";
 import { rowId } from "@/lib/validations/ids";
 import { GearItemEditSchema } from "@/lib/validations/kit";
@@ -16,7 +16,7 @@ export const GET = crewRoute<Params>("kit.read", async ({ crew }, _request, { id
 });
 
 export const PATCH = crewRoute<Params>("kit.write", async ({ crew }, request, { id }) => {
-  const edit = GearItemEditSchema.parse(await readJson(request));
+  const edit = await parseBody(request, GearItemEditSchema);
   const current = await findItem(crew.id, rowId(id, "item"));
   if (!current) throw new RequestError(404, "No such item in this crew.");
   if (current.retiredOn && edit.inServiceSince > current.retiredOn) {

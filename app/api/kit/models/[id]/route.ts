@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { crewRoute, readJson } from "@/lib/api";
+import { crewRoute, parseBody } from "@/lib/api";
 import { RequestError } from "@/lib/http-errors";
 import { rowId } from "@/lib/validations/ids";
 import { GearModelSchema } from "@/lib/validations/kit";
@@ -14,7 +14,7 @@ export const GET = crewRoute<Params>("kit.read", async ({ crew }, _request, { id
 });
 
 export const PATCH = crewRoute<Params>("kit.write", async ({ crew }, request, { id }) => {
-  const model = GearModelSchema.parse(await readJson(request));
+  const model = await parseBody(request, GearModelSchema);
   const updated = await updateModel(crew.id, rowId(id, "gear model"), model);
   if (!updated) throw new RequestError(404, "No such gear model in this crew.");
   if (updated === "kind_changed") throw new RequestError(409, "A model's kind cannot change: record a new model of the other kind instead.");

@@ -1,12 +1,12 @@
 import { NextResponse } from "next/server";
-import { crewRoute, readJson } from "@/lib/api";
+import { crewRoute, parseBody } from "@/lib/api";
 import { RequestError } from "@/lib/http-errors";
 import { rowId } from "@/lib/validations/ids";
 import { InspectionSchema } from "@/lib/validations/kit";
 import { addInspection } from "@/db/kit";
 
 export const POST = crewRoute<{ id: string }>("kit.write", async ({ crew, user }, request, { id }) => {
-  const inspection = InspectionSchema.parse(await readJson(request));
+  const inspection = await parseBody(request, InspectionSchema);
   const row = await addInspection(crew.id, rowId(id, "item"), user.id, inspection);
   if (!row) throw new RequestError(404, "No such item in this crew.");
   return NextResponse.json({ inspection: row }, { status: 201 });
