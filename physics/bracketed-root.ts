@@ -11,7 +11,7 @@ export function bracketedRoot(f: (x: number) => number, lo: number, hi: number, 
   let fb = f(b);
   if (fa === 0) return a;
   if (fb === 0) return b;
-  if (!(fa * fb < 0)) throw new SolveError(`${what}: no sign change on [${lo}, ${hi}]`, 0, Math.min(Math.abs(fa), Math.abs(fb)));
+  if (!(fa * fb < 0)) throw new SolveError(what, 0, Math.min(Math.abs(fa), Math.abs(fb)), `found no sign change on [${lo}, ${hi}]`);
   for (let i = 0; i < 200; i++) {
     const c = b - (fb * (b - a)) / (fb - fa);
     const fc = f(c);

@@ -1,3 +1,5 @@
+import { cutDown, roundUp } from "./display";
+
 /** One result from the crew's slip bench. "held" means the test stopped without a slip: F is only a lower bound. */
 export interface SlipResult {
   device: string;
@@ -35,9 +37,8 @@ export function checkBrake(device: string, ropeDiameterMm: number, bench: readon
   const results = bench.filter((r) => sameDevice(r.device, device) && sameDiameter(r.ropeDiameterMm, ropeDiameterMm));
   const slipped = results.filter((r) => r.result === "slipped").map((r) => r.forceN);
   const held = results.filter((r) => r.result === "held").map((r) => r.forceN);
-  const kN = (f: number) => `${(f / 1000).toFixed(2)} kN`;
-  // A margin is never shown larger than it is: cut to two decimals, not rounded.
-  const marginText = (m: number) => (Math.floor(m * 100) / 100).toFixed(2);
+  const load = (f: number) => `${roundUp(f / 1000)} kN`;
+  const capacity = (f: number) => `${cutDown(f / 1000)} kN`;
   const base = { brakeForce, resultsUsed: results.length };
   if (slipped.length > 0) {
     const slipLoad = Math.min(...slipped);
@@ -51,8 +52,8 @@ export function checkBrake(device: string, ropeDiameterMm: number, bench: readon
       margin,
       highestLineTensionHeld: slipLoad * brakeAdvantage,
       message: holds
-        ? `${device} on ${ropeDiameterMm} mm holds: ${kN(brakeForce)} at the brake against a lowest measured slip of ${kN(slipLoad)} (margin ${marginText(margin)}).`
-        : `${device} on ${ropeDiameterMm} mm slips: ${kN(brakeForce)} at the brake reaches its lowest measured slip of ${kN(slipLoad)}.`,
+        ? `${device} on ${ropeDiameterMm} mm holds: ${load(brakeForce)} at the brake against a lowest measured slip of ${capacity(slipLoad)} (margin ${cutDown(margin)}).`
+        : `${device} on ${ropeDiameterMm} mm slips: ${load(brakeForce)} at the brake reaches its lowest measured slip of ${capacity(slipLoad)}.`,
     };
   }
   if (held.length > 0) {
@@ -66,7 +67,7 @@ export function checkBrake(device: string, ropeDiameterMm: number, bench: readon
         lowerBoundOnly: true,
         margin,
         highestLineTensionHeld: heldTo * brakeAdvantage,
-        message: `${device} on ${ropeDiameterMm} mm held to ${kN(heldTo)} on the bench without slipping; ${kN(brakeForce)} at the brake is within that (margin at least ${marginText(margin)}; the slip load itself was never measured).`,
+        message: `${device} on ${ropeDiameterMm} mm held to ${capacity(heldTo)} on the bench without slipping; ${load(brakeForce)} at the brake is within that (margin at least ${cutDown(margin)}; the slip load itself was never measured).`,
       };
     }
     return {
@@ -76,7 +77,7 @@ export function checkBrake(device: string, ropeDiameterMm: number, bench: readon
       lowerBoundOnly: true,
       margin: heldTo / brakeForce,
       highestLineTensionHeld: heldTo * brakeAdvantage,
-      message: `${device} on ${ropeDiameterMm} mm was only tested to ${kN(heldTo)}; ${kN(brakeForce)} at the brake is beyond anything the bench has shown.`,
+      message: `${device} on ${ropeDiameterMm} mm was only tested to ${capacity(heldTo)}; ${load(brakeForce)} at the brake is beyond anything the bench has shown.`,
     };
   }
   return {

@@ -1,3 +1,4 @@
+import { roundUp } from "./display";
 import { anchorLoads, type AnchorLoads } from "./bridle";
 import { checkBrake, type BrakeCheck } from "./brake-check";
 import { CAUTIONS } from "./cautions";
@@ -95,7 +96,20 @@ function fallHeight(rig: RigInput): number {
   if (leashLengthM === undefined || harnessHeightM === undefined) {
     throw new RigInputError("leashFall", rig.leashFall, "fallHeightM, or both leashLengthM and harnessHeightM (the fall is leash length + harness height above the line)");
   }
+  if (leashLengthM + harnessHeightM > 100) {
+    throw new RigInputError("leashFall.leashLengthM", leashLengthM, `a leash length that, with the harness height of ${harnessHeightM} m, makes a free fall of at most 100 m`);
+  }
   return leashLengthM + harnessHeightM;
+}
+
+/** Where the leash fall happens; the line cannot deflect at an anchor, so the fall must be between them. */
+function fallPosition(rig: RigInput, walkerX: number): number {
+  const given = rig.leashFall.positionFraction;
+  const x = given === undefined ? walkerX : given * rig.spanM;
+  if (x > 0 && x < rig.spanM) return x;
+  if (given !== undefined) throw new RigInputError("leashFall.positionFraction", given, "a fraction of the span strictly between 0 and 1: the line cannot deflect at an anchor");
+  const field = rig.walker.positionM === undefined ? "walker.positionFraction" : "walker.positionM";
+  throw new RigInputError(field, rig.walker.positionM ?? rig.walker.positionFraction, "a position between the anchors, or a leash-fall position (leashFall.positionFraction, between 0 and 1) when the walker stands at an anchor");
 }
 
 /** Evaluates a rig: tensions, sag, sweep, leash fall, pulley system, brake, anchors and safety factors. */
@@ -103,6 +117,9 @@ export function evaluateRig(input: unknown): RigResult {
   const rig = parseRigInput(input);
   const warnings: string[] = [];
   const mbs = rig.mainline.mbsN;
+  if (Math.abs(rig.heightDifferenceM) > rig.spanM) {
+    throw new RigInputError("heightDifferenceM", rig.heightDifferenceM, `a height difference no larger than the span (|h| ≤ ${rig.spanM} m)`);
+  }
   if (rig.pretension.forceN >= mbs) {
     throw new RigInputError("pretension.forceN", rig.pretension.forceN, `a pretension > 0 N and below the mainline's MBS, ${mbs} N`);
   }
@@ -116,7 +133,7 @@ export function evaluateRig(input: unknown): RigResult {
   const walkerX = walkerPosition(rig);
   const walkerLoad = rig.walker.massKg * STANDARD_GRAVITY;
   const fall = fallHeight(rig);
-  const fallX = rig.leashFall.positionFraction === undefined ? walkerX : rig.leashFall.positionFraction * rig.spanM;
+  const fallX = fallPosition(rig, walkerX);
 
   const unloaded = lengthForPretension(line, rig.pretension.forceN, rig.pretension.readAt, mbs);
   const length = unloaded.variables.length;
@@ -159,7 +176,7 @@ export function evaluateRig(input: unknown): RigResult {
 
   const extrapolated = peakLine > line.curve.lastMeasuredTension;
   if (extrapolated) {
-    warnings.push(`Peak tension ${(peakLine / 1000).toFixed(2)} kN is beyond the stretch curve's last measured point (${(line.curve.lastMeasuredTension / 1000).toFixed(2)} kN): the curve is extrapolated with its last stiffness.`);
+    warnings.push(`Peak tension ${roundUp(peakLine / 1000)} kN is beyond the stretch curve's last measured point (${(line.curve.lastMeasuredTension / 1000).toFixed(2)} kN): the curve is extrapolated with its last stiffness.`);
   }
   for (const f of factors.filter((f) => !f.passes)) {
     warnings.push(`${f.name} (${f.location === "line" ? "line" : `anchor ${f.location}`}): safety factor ${f.shown} is below the crew minimum of ${f.minimum}.`);

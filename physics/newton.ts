@@ -21,11 +21,20 @@ export function newtonSolve(system: NewtonSystem, start: number[], options: Newt
   let x = start.slice();
   let { residual, jacobian } = system.evaluate(x);
   let norm = maxAbs(residual);
-  for (let iteration = 0; iteration <= maxIterations; iteration++) {
+  let why: string | undefined;
+  let iteration = 0;
+  for (; iteration <= maxIterations; iteration++) {
     if (norm < tolerance) return { x, iterations: iteration };
-    if (iteration === maxIterations || !Number.isFinite(norm)) break;
+    if (iteration === maxIterations) break;
+    if (!Number.isFinite(norm)) {
+      why = `reached a non-finite residual after ${iteration} iterations`;
+      break;
+    }
     const step = solveLinear(jacobian, residual);
-    if (step === null) break;
+    if (step === null) {
+      why = `met a singular Jacobian after ${iteration} iterations`;
+      break;
+    }
     let scale = 1;
     let accepted = false;
     for (let halving = 0; halving < 40; halving++, scale /= 2) {
@@ -43,9 +52,12 @@ export function newtonSolve(system: NewtonSystem, start: number[], options: Newt
         break;
       }
     }
-    if (!accepted) break;
+    if (!accepted) {
+      why = `could not reduce the residual after ${iteration} iterations`;
+      break;
+    }
   }
-  throw new SolveError(options.what, maxIterations, norm);
+  throw new SolveError(options.what, iteration, norm, why);
 }
 
 function maxAbs(values: number[]): number {

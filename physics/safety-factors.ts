@@ -1,3 +1,5 @@
+import { cutDown } from "./display";
+
 /** Kinds of component the crew sets a minimum safety factor for. */
 export const COMPONENT_CATEGORIES = ["webbing", "connector", "sling", "anchor", "other"] as const;
 export type ComponentCategory = (typeof COMPONENT_CATEGORIES)[number];
@@ -30,6 +32,6 @@ export function safetyFactors(components: readonly LoadedComponent[], minimums: 
   return components.map((c) => {
     const factor = c.mbs / c.peakLoad;
     const minimum = minimums[c.category];
-    return { ...c, factor, shown: (Math.floor(factor * 100) / 100).toFixed(2), minimum, passes: factor >= minimum };
+    return { ...c, factor, shown: cutDown(factor), minimum, passes: factor >= minimum };
   });
 }

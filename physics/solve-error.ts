@@ -3,8 +3,9 @@ export class SolveError extends Error {
   readonly iterations: number;
   readonly residual: number;
 
-  constructor(what: string, iterations: number, residual: number) {
-    super(`${what} did not converge after ${iterations} iterations (scaled residual ${residual.toExponential(2)})`);
+  /** `why` says how the solve failed; by default, that it ran out of iterations. */
+  constructor(what: string, iterations: number, residual: number, why = `did not converge after ${iterations} iterations`) {
+    super(`${what} ${why} (scaled residual ${residual.toExponential(2)})`);
     this.name = "SolveError";
     this.iterations = iterations;
     this.residual = residual;

@@ -1,7 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { checkBrake, type SlipResult } from "../../../physics";
 
-// Invented bench data for an invented device.
+// Invented bench data for an invented device. The rules checked here are the product's definition
+// of the brake check (force at the brake = line tension / ideal MA between brake and line; margin =
+// lowest slip / that force; a held-to result is only a lower bound): common practice, no source.
+// The figures are worked by hand: 9000 N / 6 = 1500 N; 3900 / 1500 = 2.6; 3900 × 6 = 23 400 N.
 const bench: SlipResult[] = [
   { device: "Demo cam", ropeDiameterMm: 11, result: "slipped", forceN: 4200 },
   { device: "Demo cam", ropeDiameterMm: 11, result: "slipped", forceN: 3900 },

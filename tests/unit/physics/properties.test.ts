@@ -4,7 +4,10 @@ import { lengthForPretension, solveLine, STANDARD_GRAVITY } from "../../../physi
 import { demoLine, MBS, STIFF, STRETCHY } from "./fixtures";
 
 
-// Property tests (fast-check), kept to a modest number of runs.
+// Property tests (fast-check), kept to a modest number of runs. The properties come from physical
+// reasoning, not an outside table: a tighter or more heavily loaded cable pulls harder (statics of a
+// cable under a point load, T = W / (2 sin θ) with θ shrinking as pretension grows), and a level line
+// is symmetric about mid-span.
 const rig = fc.record({
   span: fc.double({ min: 10, max: 800, noNaN: true }),
   riseShare: fc.double({ min: -0.05, max: 0.05, noNaN: true }),

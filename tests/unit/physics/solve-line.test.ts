@@ -92,23 +92,24 @@ describe("solveLine against an independent many-node model (400 elements), solve
   // Newton on node positions (tests/unit/physics/reference), and dynamic relaxation run to the
   // tolerance the bench times it at (tests/bench/dynamic-relaxation-line.ts).
   const solvers = [
-    { method: "Newton", fractions: [0.1, 0.5], solve: (model: ManyNodeLine) => solveManyNodeLine(model) },
-    { method: "dynamic relaxation", fractions: [0.5], solve: (model: ManyNodeLine) => relaxManyNodeLine(model, RELAXATION_TOLERANCE) },
+    // Newton converges fully, so it must agree far closer than the required 0.2 % (measured: ≤ 1.1e-5).
+    { method: "Newton", fractions: [0.1, 0.5], agreement: 1e-4, solve: (model: ManyNodeLine) => solveManyNodeLine(model) },
+    { method: "dynamic relaxation", fractions: [0.5], agreement: 2e-3, solve: (model: ManyNodeLine) => relaxManyNodeLine(model, RELAXATION_TOLERANCE) },
   ];
-  for (const { method, fractions, solve } of solvers) {
+  for (const { method, fractions, agreement, solve } of solvers) {
     for (const c of cases) {
       for (const [curveName, points] of [["stretchy", STRETCHY], ["stiff", STIFF]] as const) {
         for (const fraction of fractions) {
-          it(`${method}: ${c.name}, ${curveName} curve, walker at ${fraction * 100} %: anchor tensions and sag within 0.2 %`, () => {
+          it(`${method}: ${c.name}, ${curveName} curve, walker at ${fraction * 100} %: anchor tensions and sag within ${agreement * 100} %`, () => {
             const line = demoLine(c.span, c.rise, c.mass, points);
             const length = lengthForPretension(line, c.pretension, "a", MBS).variables.length;
             const walker = 80 * STANDARD_GRAVITY;
             const model = solve(manyNodeLine(line, length, [...points], walker, fraction, 400));
             const s = solveLine(line, length, { force: walker, x: model.walkerX }, MBS);
             const modelSag = (c.rise * model.walkerX) / c.span - model.walkerY;
-            expect(relative(s.tensionA, model.tensionA)).toBeLessThan(2e-3);
-            expect(relative(s.tensionB, model.tensionB)).toBeLessThan(2e-3);
-            expect(relative(s.loadSag, modelSag)).toBeLessThan(2e-3);
+            expect(relative(s.tensionA, model.tensionA)).toBeLessThan(agreement);
+            expect(relative(s.tensionB, model.tensionB)).toBeLessThan(agreement);
+            expect(relative(s.loadSag, modelSag)).toBeLessThan(agreement);
           });
         }
       }

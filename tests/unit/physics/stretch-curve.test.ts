@@ -32,11 +32,6 @@ describe("createStretchCurve / strainAt", () => {
     ["NaN", [{ tensionKN: 0, elongationPct: 0 }, { tensionKN: NaN, elongationPct: 1 }], "stretchPoints.1.tensionKN"],
   ])("rejects a curve with %s, naming the field", (_, points, field) => {
     expect(() => createStretchCurve(points)).toThrow(RigInputError);
-    try {
-      createStretchCurve(points);
-    } catch (e) {
-      expect((e as RigInputError).field).toBe(field);
-      expect((e as RigInputError).allowed.length).toBeGreaterThan(5);
-    }
+    expect(() => createStretchCurve(points)).toThrow(expect.objectContaining({ field, allowed: expect.stringMatching(/.{6,}/) }));
   });
 });
