@@ -25,7 +25,7 @@ interface FileType {
 const startsWith = (head: Uint8Array, bytes: number[], at = 0) => bytes.every((b, i) => head[at + i] === b);
 const ascii = (text: string) => [...text].map((c) => c.charCodeAt(0));
 
-// Signatures: PNG (ISO/IEC 15948), JPEG SOI marker (ISO/IEC 10918-1), WebP RIFF container, PDF header (ISO 32000).
+// Signatures: PNG (ISO/IEC 15948), JPEG SOI marker (ISO/IEC 10918-1), WebP RIFF container (RFC 9649, cited from memory), PDF header (ISO 32000).
 const TYPES: Record<UploadPurpose, FileType[]> = {
   photo: [
     { contentType: "image/png", extensions: [".png"], matches: (h) => startsWith(h, [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]) },

@@ -20,7 +20,8 @@ function fileForm(bytes: Uint8Array, name: string, owner: Record<string, string>
   return form;
 }
 
-const uploadCount = async () => Number((await testDb("uploads").where({ crew_id: crew.id }).count<{ count: string }[]>({ count: "*" }))[0].count);
+// Both crews' uploads: a refused upload must be saved for neither, the caller's crew included.
+const uploadCount = async () => Number((await testDb("uploads").whereIn("crew_id", [crew.id, other.id]).count<{ count: string }[]>({ count: "*" }))[0].count);
 
 beforeAll(async () => {
   crew = await createCrew("uploads");

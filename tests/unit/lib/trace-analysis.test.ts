@@ -12,7 +12,7 @@ describe("decimate", () => {
         const time = force.map((_, i) => i * 0.01);
         const keep = pick % force.length;
         const chart = decimate(time, force, 200, keep);
-        expect(chart.time.length).toBeLessThanOrEqual(Math.max(force.length, 201));
+        expect(chart.time.length).toBeLessThanOrEqual(201);
         expect(Math.max(...chart.force)).toBe(Math.max(...force));
         expect(Math.min(...chart.force)).toBe(Math.min(...force));
         expect(chart.time).toContain(time[keep]);

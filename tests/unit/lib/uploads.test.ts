@@ -3,7 +3,7 @@ import { checkFileSize, checkFileType, UPLOAD_LIMITS } from "@/lib/uploads";
 import { RequestError } from "@/lib/http-errors";
 
 // Signatures from the formats' own specifications: PNG (ISO/IEC 15948 §5.2), JPEG SOI + APP0 (ISO/IEC 10918-1),
-// WebP in a RIFF container (RFC 9649 §2), PDF header (ISO 32000-1 §7.5.2).
+// WebP in a RIFF container (RFC 9649 §2, cited from memory), PDF header (ISO 32000-1 §7.5.2).
 const PNG = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13]);
 const JPEG = new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 0, 16, 0x4a, 0x46, 0x49, 0x46]);
 const WEBP = new TextEncoder().encode("RIFF\u0000\u0000\u0000\u0000WEBPVP8 ");
