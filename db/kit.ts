@@ -158,8 +158,9 @@ export function listInspections(crewId: string, itemId: string): Promise<Inspect
 export async function addInspection(crewId: string, itemId: string, inspectorId: string, inspection: Inspection): Promise<InspectionRow | null> {
   const item = await findItem(crewId, itemId);
   if (!item) return null;
-  const [{ id }] = await db("gear_inspections")
+  const [row] = await db("gear_inspections")
     .insert({ crew_id: crewId, item_id: itemId, inspected_by: inspectorId, inspected_on: inspection.inspectedOn, result: inspection.result, notes: inspection.notes })
-    .returning("id");
-  return (await listInspections(crewId, itemId)).find((row) => row.id === id)!;
+    .returning(["id", db.raw("inspected_on::text as \"inspectedOn\""), "result", "notes"]);
+  const inspector = await db("users").where({ id: inspectorId }).first("name");
+  return { ...row, inspectorName: inspector.name };
 }

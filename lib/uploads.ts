@@ -54,13 +54,32 @@ const extensionOf = (fileName: string) => {
   return dot < 0 ? "" : fileName.slice(dot).toLowerCase();
 };
 
-/** The content type the file really is, when both its name and its first bytes agree; else a 415 saying what is allowed. */
-export function checkFileType(purpose: UploadPurpose, fileName: string, bytes: Uint8Array): string {
+function typeByName(purpose: UploadPurpose, fileName: string): FileType {
   const extension = extensionOf(fileName);
   const byName = TYPES[purpose].find((t) => t.extensions.includes(extension));
   if (!byName) throw new RequestError(415, `"${fileName}" is not ${ALLOWED[purpose]}: its name does not end in one of those extensions.`);
-  if (!byName.matches(bytes)) throw new RequestError(415, `"${fileName}" is named like ${ALLOWED[purpose]}, but its contents are not: upload the file itself, not a renamed one.`);
+  return byName;
+}
+
+const renamed = (purpose: UploadPurpose, fileName: string) =>
+  new RequestError(415, `"${fileName}" is named like ${ALLOWED[purpose]}, but its contents are not: upload the file itself, not a renamed one.`);
+
+/** The content type the file really is, when both its name and its first bytes agree; else a 415 saying what is allowed. */
+export function checkFileType(purpose: UploadPurpose, fileName: string, bytes: Uint8Array): string {
+  const byName = typeByName(purpose, fileName);
+  if (!byName.matches(bytes)) throw renamed(purpose, fileName);
   return byName.contentType;
+}
+
+/** A trace's content type and its whole text, decoded once: named as a CSV, no NUL byte, UTF-8 throughout; else a 415. */
+export function traceText(fileName: string, bytes: Uint8Array): { contentType: string; text: string } {
+  const byName = typeByName("trace", fileName);
+  if (bytes.includes(0)) throw renamed("trace", fileName);
+  try {
+    return { contentType: byName.contentType, text: new TextDecoder("utf-8", { fatal: true }).decode(bytes) };
+  } catch {
+    throw new RequestError(415, `"${fileName}" is not UTF-8 text: save the trace as a UTF-8 CSV.`);
+  }
 }
 
 export function checkFileSize(purpose: UploadPurpose, fileName: string, size: number): void {

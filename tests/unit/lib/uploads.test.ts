@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { checkFileSize, checkFileType, UPLOAD_LIMITS } from "@/lib/uploads";
+import { checkFileSize, checkFileType, traceText, UPLOAD_LIMITS } from "@/lib/uploads";
 import { RequestError } from "@/lib/http-errors";
 
 // Signatures from the formats' own specifications: PNG (ISO/IEC 15948 §5.2), JPEG SOI + APP0 (ISO/IEC 10918-1),
@@ -46,5 +46,17 @@ describe("checkFileSize", () => {
     expect(status(() => checkFileSize("photo", "a.png", UPLOAD_LIMITS.photo))).toBe(200);
     expect(() => checkFileSize("photo", "a.png", UPLOAD_LIMITS.photo + 1)).toThrow(/at most 15 MiB/);
     expect(status(() => checkFileSize("trace", "t.csv", 0))).toBe(400);
+  });
+});
+
+describe("traceText", () => {
+  it("gives a trace's whole text with its type, and refuses binary or non-UTF-8 bytes anywhere in it", () => {
+    expect(traceText("pull.csv", CSV)).toEqual({ contentType: "text/csv", text: "time,force\n0,1\n" });
+    expect(() => traceText("pull.csv", new Uint8Array([0x74, 0, 0x65]))).toThrow(/contents are not/);
+    const lateBadByte = new Uint8Array(70 * 1024).fill(0x31);
+    lateBadByte[69 * 1024] = 0xc3;
+    lateBadByte[69 * 1024 + 1] = 0x28;
+    expect(() => traceText("pull.csv", lateBadByte)).toThrow(/is not UTF-8 text/);
+    expect(() => traceText("pull.xlsx", CSV)).toThrow(/does not end in one of those extensions/);
   });
 });

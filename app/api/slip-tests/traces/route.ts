@@ -1,10 +1,9 @@
 import { NextResponse } from "next/server";
 import { crewRoute } from "@/lib/api";
-import { RequestError } from "@/lib/http-errors";
 import { putObject } from "@/lib/storage";
 import { analyseTrace } from "@/lib/trace-analysis";
 import { parseTraceCsv } from "@/lib/trace-csv";
-import { checkFileType, randomStorageKey, readUploadForm, sha256Hex } from "@/lib/uploads";
+import { randomStorageKey, readUploadForm, sha256Hex, traceText } from "@/lib/uploads";
 import { TraceOptionsSchema } from "@/lib/validations/slip-tests";
 import { insertUpload } from "@/db/uploads";
 import { toNewtons } from "@/physics";
@@ -20,13 +19,7 @@ export const POST = crewRoute("slip.write", async ({ crew, user }, request) => {
     return typeof raw === "string" && raw.trim() !== "" ? Number(raw.replace(",", ".")) : undefined;
   };
   const options = TraceOptionsSchema.parse({ unit: form.get("unit") ?? undefined, drop: numberField("drop"), pullEndS: numberField("pullEndS") });
-  const contentType = checkFileType("trace", file.name, bytes);
-  let text: string;
-  try {
-    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
-  } catch {
-    throw new RequestError(415, `"${file.name}" is not UTF-8 text: save the trace as a UTF-8 CSV.`);
-  }
+  const { contentType, text } = traceText(file.name, bytes);
   const analysis = analyseTrace(parseTraceCsv(text, options.unit), options.unit, toNewtons(options.drop, options.unit), options.pullEndS);
   const sha256 = sha256Hex(bytes);
   const storageKey = randomStorageKey();
