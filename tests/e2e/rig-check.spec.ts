@@ -47,12 +47,14 @@ test("a rigger checks the worked example, changes it, sees bad input refused bes
   // Exactly, or to within a billionth where the browser's and Node's Math functions round differently in the last bit.
   await expect(page.getByText(/The server agrees: every figure matches the browser's/)).toBeVisible();
 
-  // The crew's own slip bench (invented demo data, seeds/02): the Talus Cam Brake slipped at 7.41 kN lowest on 10.5 mm rope.
+  // The crew's own slip bench (invented demo data, seeds/02): on 10.5 mm rope the Talus Cam Brake slipped at 7.40 kN lowest
+  // (a pull seeded at 7400 N, its slip taken from the trace) and at 7.90 kN.
+  const lowestSlip = 7.4;
   await expect(page.getByRole("table", { name: "From the crew's slip bench" })).toContainText("Talus Cam Brake");
   await page.getByLabel("Brake device", { exact: true }).fill("Talus Cam Brake");
   await page.getByLabel("Rope diameter (mm)", { exact: true }).fill("10.5");
   const brake = page.getByRole("region", { name: "Brake" });
-  await expect(brake).toContainText("lowest measured slip of 7.41 kN");
+  await expect(brake).toContainText(`lowest measured slip of ${lowestSlip.toFixed(2)} kN`);
   await expect(brake).toContainText("Holds");
   // Force at the brake = line tension ÷ ideal MA; margin = lowest slip ÷ that force, cut to two decimals (common practice, no source).
   // The page shows the tension rounded up to 0.01 kN and the slip to the nearest 0.01 kN, so the margin lies between the two cuts below.
@@ -63,8 +65,8 @@ test("a rigger checks the worked example, changes it, sees bad input refused bes
   expect(Math.abs((await kN("Force at the brake at peak tension")) - tension / advantage)).toBeLessThanOrEqual(0.01 + 1e-9);
   const cut = (m: number) => Math.floor(m * 100) / 100;
   const margin = await kN("Margin (lowest slip ÷ force at the brake)");
-  expect(margin).toBeGreaterThanOrEqual(cut(((7.41 - 0.005) * advantage) / tension));
-  expect(margin).toBeLessThanOrEqual(cut(((7.41 + 0.005) * advantage) / (tension - 0.01)));
+  expect(margin).toBeGreaterThanOrEqual(cut(((lowestSlip - 0.005) * advantage) / tension));
+  expect(margin).toBeLessThanOrEqual(cut(((lowestSlip + 0.005) * advantage) / (tension - 0.01)));
   // A diameter the bench has not tested: no verdict is borrowed from another rope.
   await page.getByLabel("Rope diameter (mm)", { exact: true }).fill("12");
   await expect(brake).toContainText("Untested for this rope");
