@@ -10,8 +10,9 @@ test("a rigger checks the worked example, changes it, sees bad input refused bes
   await expect(page.getByRole("heading", { name: "Check a line" })).toBeVisible();
   await expect(page.getByRole("complementary", { name: "Safety cautions" })).toBeVisible();
 
-  // The worked example's figures (physics/README, an invented 120 m quarry highline): walker at mid-span,
-  // tension A 4.39 kN, B 4.41 kN, sag 5.39 m; a bridle leg of 4.22 kN; brake holds, margin 3.17 (cut, never rounded up).
+  // A regression check of the worked example (an invented 120 m quarry highline), not a check against a source: walker at
+  // mid-span, tension A 4.39 kN, B 4.41 kN, sag 5.39 m; a bridle leg of 4.22 kN; brake holds, margin 3.17 (cut, never rounded up).
+  // The physics itself is checked against named outside sources in tests/unit/physics.
   await expect(figure(page, "Tension at anchor A")).toHaveText(/^4\.[34]\d kN$/);
   await expect(figure(page, "Tension at anchor B")).toHaveText(/^4\.4\d kN$/);
   await expect(figure(page, "Walker sag below the chord")).toHaveText(/^5\.[34]\d m$/);

@@ -28,6 +28,6 @@ describe("figures are rounded only in the safe direction", () => {
 
   it("gives positions to the nearest step", () => {
     expect(formatDistance(60, "si")).toBe("60.00 m");
-    expect(formatDistance(60, "us")).toBe("196.9 ft");
+    expect(formatDistance(60, "us")).toBe("196.9 ft"); // 60 m = 196.85 ft (1 ft = 0.3048 m exactly, NIST SP 811)
   });
 });

@@ -32,6 +32,7 @@ describe("the starting rig", () => {
   });
 
   it("falls back to the engine's default for a minimum the crew has not set", () => {
+    // The engine's default minimum factor of 3 is common practice, no source.
     expect(engineMinimums({ webbing: 4 })).toEqual({ webbing: 4, connector: 3, sling: 3, anchor: 3, other: 3 });
   });
 });
