@@ -9,7 +9,7 @@ const DECIMALS: Record<ForceUnit, number> = { N: 0, kN: 2, lbf: 0, kgf: 0 };
  */
 export function forceIn(newtons: number, unit: ForceUnit): number {
   const scale = 10 ** DECIMALS[unit];
-  // Rounded to 12 digits first so that 4300 N is 4.30 kN, not 4.29 through the binary fraction 429.999….
+  // Rounded to 12 digits first so that 1150 N is 1.15 kN, not 1.14 through the binary fraction 114.999….
   return Math.floor(Number((fromNewtons(newtons, unit) * scale).toPrecision(12))) / scale;
 }
 

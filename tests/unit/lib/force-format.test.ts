@@ -15,6 +15,8 @@ describe("formatForce", () => {
 
   it("keeps an exact value exact through the binary fraction", () => {
     expect(formatForce(4300, "kN")).toBe("4.30 kN");
+    expect(formatForce(1150, "kN")).toBe("1.15 kN");
+    expect(formatForce(290, "kN")).toBe("0.29 kN");
     expect(forceDigits(5000, "kN")).toBe("5.00");
   });
 
