@@ -1,4 +1,6 @@
+import type { Knex } from "knex";
 import { db } from "./knex";
+import { setPasswordHash } from "./users";
 
 export async function createPasswordReset(userId: string, tokenHash: string): Promise<void> {
   await db("password_resets").insert({ user_id: userId, token_hash: tokenHash, expires_at: db.raw("now() + interval '1 hour'") });
@@ -6,15 +8,32 @@ export async function createPasswordReset(userId: string, tokenHash: string): Pr
 
 export type ResetOutcome = { outcome: "ok"; userId: string } | { outcome: "unknown" | "expired" | "used" };
 
-/** Spends a reset token: valid once, within the hour it was issued. */
-export async function consumePasswordReset(tokenHash: string, apply: (userId: string) => Promise<void>): Promise<ResetOutcome> {
+async function whyNotUsable(trx: Knex.Transaction, tokenHash: string): Promise<ResetOutcome> {
+  const row = await trx("password_resets").where({ token_hash: tokenHash }).first("used_at", "expires_at");
+  if (!row) return { outcome: "unknown" };
+  return { outcome: row.used_at ? "used" : "expired" };
+}
+
+/**
+ * Spends a reset token (valid once, within the hour it was issued) and sets the new password in the
+ * same transaction. The token is claimed by one conditional UPDATE, so parallel requests with the same
+ * token never wait on each other's locks; every query runs on the transaction's own connection, since a
+ * query on the pool from inside a transaction needs a second connection and many at once drain the pool.
+ * The person's other unused links are spent too, and every session ends: whoever knew the old password may be signed in.
+ */
+export async function resetPassword(tokenHash: string, passwordHash: string): Promise<ResetOutcome> {
   return db.transaction(async (trx) => {
-    const row = await trx("password_resets").where({ token_hash: tokenHash }).forUpdate().first();
-    if (!row) return { outcome: "unknown" };
-    if (row.used_at) return { outcome: "used" };
-    if (new Date(row.expires_at) <= new Date()) return { outcome: "expired" };
-    await trx("password_resets").where({ token_hash: tokenHash }).update({ used_at: trx.fn.now() });
-    await apply(row.user_id);
-    return { outcome: "ok", userId: row.user_id };
+    const claimed: { user_id: string }[] = await trx("password_resets")
+      .where({ token_hash: tokenHash })
+      .whereNull("used_at")
+      .where("expires_at", ">", trx.fn.now())
+      .update({ used_at: trx.fn.now() })
+      .returning("user_id");
+    if (claimed.length === 0) return whyNotUsable(trx, tokenHash);
+    const userId = claimed[0].user_id;
+    await trx("password_resets").where({ user_id: userId }).whereNull("used_at").update({ used_at: trx.fn.now() });
+    await setPasswordHash(userId, passwordHash, trx);
+    await trx("sessions").where({ user_id: userId }).delete();
+    return { outcome: "ok", userId };
   });
 }

@@ -1,4 +1,5 @@
 import crypto from "node:crypto";
+import type { Knex } from "knex";
 import { db } from "./knex";
 
 export interface UserRow {
@@ -34,8 +35,9 @@ export async function updateProfile(userId: string, input: { name: string; email
   return true;
 }
 
-export async function setPasswordHash(userId: string, passwordHash: string): Promise<void> {
-  await db("users").where({ id: userId }).update({ password_hash: passwordHash });
+/** Sets the password hash; inside a transaction pass it as `executor`, so the query runs on its connection. */
+export async function setPasswordHash(userId: string, passwordHash: string, executor: Knex | Knex.Transaction = db): Promise<void> {
+  await executor("users").where({ id: userId }).update({ password_hash: passwordHash });
 }
 
 // Pages name a session by a hash of its id: the id itself is the cookie's secret.

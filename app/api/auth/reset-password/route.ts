@@ -2,10 +2,8 @@ import { NextResponse } from "next/server";
 import { parseBody, route } from "@/lib/api";
 import { RequestError } from "@/lib/http-errors";
 import { resetPasswordSchema } from "@/lib/validations/account";
-import { consumePasswordReset } from "@/db/password-resets";
-import { setPasswordHash } from "@/db/users";
+import { resetPassword } from "@/db/password-resets";
 import { hashPassword } from "@/lib/auth/passwords";
-import { lucia } from "@/lib/auth/lucia";
 import { hashToken } from "@/lib/tokens";
 
 const refusals = {
@@ -18,8 +16,7 @@ const refusals = {
 export const POST = route(async (request) => {
   const { token, password } = await parseBody(request, resetPasswordSchema);
   const passwordHash = await hashPassword(password);
-  const result = await consumePasswordReset(hashToken(token), (userId) => setPasswordHash(userId, passwordHash));
+  const result = await resetPassword(hashToken(token), passwordHash);
   if (result.outcome !== "ok") throw new RequestError(410, refusals[result.outcome]);
-  await lucia.invalidateUserSessions(result.userId);
   return NextResponse.json({ message: "Your password is changed. Sign in with it now." });
 });
