@@ -14,10 +14,17 @@ export default defineConfig({
     screenshot: "only-on-failure",
     launchOptions: {
       executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium",
-      args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--disable-quic", "--no-first-run"],
+      args: [
+        "--headless",
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+        "--disable-quic",
+        "--no-first-run",
+      ],
     },
   },
-  projects: [
-    { name: "desktop", use: { ...devices["Desktop Chrome"], channel: undefined } },
-  ],
+  projects: [{ name: "desktop", use: { ...devices["Desktop Chrome"], channel: undefined } }],
 });

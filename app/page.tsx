@@ -16,8 +16,8 @@ export default function HomePage() {
         <p className="text-sm font-semibold uppercase tracking-wide text-spruce-700">Spanwright</p>
         <h1 className="mt-2 text-3xl">Rig plans your whole crew can check before anyone walks</h1>
         <p className="mt-4 text-lg text-ink-700">
-          Spanwright works out what a slackline, longline or highline will do to its anchors, its brake and its walker, and
-          keeps the crew&apos;s plans, gear and slip tests in one place.
+          Spanwright works out what a slackline, longline or highline will do to its anchors, its brake and its walker, and keeps the crew&apos;s plans, gear
+          and slip tests in one place.
         </p>
         <div className="mt-6 flex flex-wrap gap-3">
           <Link href="/sign-in" className={buttonClasses("primary")}>

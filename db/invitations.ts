@@ -44,7 +44,12 @@ export async function createInvitation(input: { crewId: string; email: string; r
 
 /** Invitations of the crew not yet accepted or revoked, newest first. */
 export function openInvitationsOf(crewId: string): Promise<Invitation[]> {
-  return withCrew().where("invitations.crew_id", crewId).whereNull("accepted_at").whereNull("revoked_at").orderBy("invitations.created_at", "desc").select(columns);
+  return withCrew()
+    .where("invitations.crew_id", crewId)
+    .whereNull("accepted_at")
+    .whereNull("revoked_at")
+    .orderBy("invitations.created_at", "desc")
+    .select(columns);
 }
 
 export async function revokeInvitation(crewId: string, id: string): Promise<boolean> {

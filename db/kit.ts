@@ -45,15 +45,18 @@ const modelColumns = (knex: Knex) => [
   "gear_models.name",
   "gear_models.specs",
   "gear_models.notes",
-  knex.raw("gear_models.retired_on::text as \"retiredOn\""),
-  knex.raw("gear_models.retired_reason as \"retiredReason\""),
-  knex.raw("gear_models.updated_at as \"updatedAt\""),
-  knex.raw("(select count(*)::int from gear_items i where i.model_id = gear_models.id) as \"itemCount\""),
-  knex.raw("(select count(*)::int from gear_items i where i.model_id = gear_models.id and i.retired_on is null) as \"inServiceCount\""),
+  knex.raw('gear_models.retired_on::text as "retiredOn"'),
+  knex.raw('gear_models.retired_reason as "retiredReason"'),
+  knex.raw('gear_models.updated_at as "updatedAt"'),
+  knex.raw('(select count(*)::int from gear_items i where i.model_id = gear_models.id) as "itemCount"'),
+  knex.raw('(select count(*)::int from gear_items i where i.model_id = gear_models.id and i.retired_on is null) as "inServiceCount"'),
 ];
 
 export function listModels(crewId: string, kinds?: readonly GearKind[]): Promise<GearModelRow[]> {
-  const query = db("gear_models").where("gear_models.crew_id", crewId).select(modelColumns(db)).orderBy([{ column: "gear_models.kind" }, { column: "gear_models.name" }]);
+  const query = db("gear_models")
+    .where("gear_models.crew_id", crewId)
+    .select(modelColumns(db))
+    .orderBy([{ column: "gear_models.kind" }, { column: "gear_models.name" }]);
   if (kinds) query.whereIn("gear_models.kind", kinds);
   return query;
 }
@@ -90,24 +93,26 @@ export async function retireModel(crewId: string, id: string, retirement: Retire
 
 const itemColumns = (knex: Knex) => [
   "gear_items.id",
-  knex.raw("gear_items.model_id as \"modelId\""),
-  knex.raw("gear_models.name as \"modelName\""),
+  knex.raw('gear_items.model_id as "modelId"'),
+  knex.raw('gear_models.name as "modelName"'),
   "gear_models.kind",
   "gear_items.label",
-  knex.raw("gear_items.in_service_since::text as \"inServiceSince\""),
+  knex.raw('gear_items.in_service_since::text as "inServiceSince"'),
   "gear_items.notes",
-  knex.raw("gear_items.retired_on::text as \"retiredOn\""),
-  knex.raw("gear_items.retired_reason as \"retiredReason\""),
+  knex.raw('gear_items.retired_on::text as "retiredOn"'),
+  knex.raw('gear_items.retired_reason as "retiredReason"'),
   knex.raw(
-    "(select inspected_on::text from gear_inspections g where g.item_id = gear_items.id order by inspected_on desc, created_at desc limit 1) as \"lastInspectedOn\"",
+    '(select inspected_on::text from gear_inspections g where g.item_id = gear_items.id order by inspected_on desc, created_at desc limit 1) as "lastInspectedOn"',
   ),
-  knex.raw("(select result from gear_inspections g where g.item_id = gear_items.id order by inspected_on desc, created_at desc limit 1) as \"lastResult\""),
+  knex.raw('(select result from gear_inspections g where g.item_id = gear_items.id order by inspected_on desc, created_at desc limit 1) as "lastResult"'),
 ];
 
 const itemsOf = (crewId: string) => db("gear_items").join("gear_models", "gear_models.id", "gear_items.model_id").where("gear_items.crew_id", crewId);
 
 export function listItems(crewId: string, modelId?: string): Promise<GearItemRow[]> {
-  const query = itemsOf(crewId).select(itemColumns(db)).orderBy([{ column: "gear_models.name" }, { column: "gear_items.label" }]);
+  const query = itemsOf(crewId)
+    .select(itemColumns(db))
+    .orderBy([{ column: "gear_models.name" }, { column: "gear_items.label" }]);
   if (modelId) query.where("gear_items.model_id", modelId);
   return query;
 }
@@ -151,16 +156,32 @@ export function listInspections(crewId: string, itemId: string): Promise<Inspect
   return db("gear_inspections")
     .join("users", "users.id", "gear_inspections.inspected_by")
     .where({ "gear_inspections.crew_id": crewId, "gear_inspections.item_id": itemId })
-    .orderBy([{ column: "gear_inspections.inspected_on", order: "desc" }, { column: "gear_inspections.created_at", order: "desc" }])
-    .select("gear_inspections.id", db.raw("inspected_on::text as \"inspectedOn\""), "gear_inspections.result", "gear_inspections.notes", db.raw("users.name as \"inspectorName\""));
+    .orderBy([
+      { column: "gear_inspections.inspected_on", order: "desc" },
+      { column: "gear_inspections.created_at", order: "desc" },
+    ])
+    .select(
+      "gear_inspections.id",
+      db.raw('inspected_on::text as "inspectedOn"'),
+      "gear_inspections.result",
+      "gear_inspections.notes",
+      db.raw('users.name as "inspectorName"'),
+    );
 }
 
 export async function addInspection(crewId: string, itemId: string, inspectorId: string, inspection: Inspection): Promise<InspectionRow | null> {
   const item = await findItem(crewId, itemId);
   if (!item) return null;
   const [row] = await db("gear_inspections")
-    .insert({ crew_id: crewId, item_id: itemId, inspected_by: inspectorId, inspected_on: inspection.inspectedOn, result: inspection.result, notes: inspection.notes })
-    .returning(["id", db.raw("inspected_on::text as \"inspectedOn\""), "result", "notes"]);
+    .insert({
+      crew_id: crewId,
+      item_id: itemId,
+      inspected_by: inspectorId,
+      inspected_on: inspection.inspectedOn,
+      result: inspection.result,
+      notes: inspection.notes,
+    })
+    .returning(["id", db.raw('inspected_on::text as "inspectedOn"'), "result", "notes"]);
   const inspector = await db("users").where({ id: inspectorId }).first("name");
   return { ...row, inspectorName: inspector.name };
 }

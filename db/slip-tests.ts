@@ -20,20 +20,20 @@ export interface SlipTestRow extends SlipTableTest {
 
 const columns = [
   "slip_tests.id",
-  db.raw("slip_tests.device_model_id as \"deviceId\""),
-  db.raw("device.name as \"deviceName\""),
-  db.raw("slip_tests.rope_model_id as \"ropeModelId\""),
-  db.raw("rope.name as \"ropeModelName\""),
-  db.raw("slip_tests.rope_diameter_mm::float8 as \"ropeDiameterMm\""),
+  db.raw('slip_tests.device_model_id as "deviceId"'),
+  db.raw('device.name as "deviceName"'),
+  db.raw('slip_tests.rope_model_id as "ropeModelId"'),
+  db.raw('rope.name as "ropeModelName"'),
+  db.raw('slip_tests.rope_diameter_mm::float8 as "ropeDiameterMm"'),
   "slip_tests.result",
-  db.raw("slip_tests.force_n as \"forceN\""),
-  db.raw("slip_tests.force_unit as \"forceUnit\""),
-  db.raw("slip_tests.tested_on::text as \"testedOn\""),
-  db.raw("users.name as \"testerName\""),
+  db.raw('slip_tests.force_n as "forceN"'),
+  db.raw('slip_tests.force_unit as "forceUnit"'),
+  db.raw('slip_tests.tested_on::text as "testedOn"'),
+  db.raw('users.name as "testerName"'),
   "slip_tests.notes",
-  db.raw("slip_tests.trace_upload_id as \"traceUploadId\""),
-  db.raw("slip_tests.detected_result as \"detectedResult\""),
-  db.raw("slip_tests.detected_force_n as \"detectedForceN\""),
+  db.raw('slip_tests.trace_upload_id as "traceUploadId"'),
+  db.raw('slip_tests.detected_result as "detectedResult"'),
+  db.raw('slip_tests.detected_force_n as "detectedForceN"'),
 ];
 
 const testsOf = (crewId: string) =>
@@ -51,7 +51,10 @@ export interface SlipTestFilter {
 export function listSlipTests(crewId: string, filter: SlipTestFilter = {}): Promise<SlipTestRow[]> {
   const query = testsOf(crewId)
     .select(columns)
-    .orderBy([{ column: "slip_tests.tested_on", order: "desc" }, { column: "slip_tests.created_at", order: "desc" }]);
+    .orderBy([
+      { column: "slip_tests.tested_on", order: "desc" },
+      { column: "slip_tests.created_at", order: "desc" },
+    ]);
   if (filter.deviceId) query.where("slip_tests.device_model_id", filter.deviceId);
   if (filter.ropeDiameterMm !== undefined) query.where("slip_tests.rope_diameter_mm", filter.ropeDiameterMm);
   return query;
@@ -115,7 +118,7 @@ export async function slipTableLinkOf(crewId: string): Promise<{ createdAt: stri
     .join("users", "users.id", "slip_table_links.created_by")
     .where({ "slip_table_links.crew_id": crewId })
     .whereNull("slip_table_links.revoked_at")
-    .first(db.raw("slip_table_links.created_at as \"createdAt\""), db.raw("users.name as \"createdBy\""));
+    .first(db.raw('slip_table_links.created_at as "createdAt"'), db.raw('users.name as "createdBy"'));
   return row ?? null;
 }
 

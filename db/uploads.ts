@@ -26,14 +26,14 @@ export type NewUpload = Omit<UploadRow, "id" | "createdAt" | "modelId" | "itemId
 const columns = [
   "id",
   "purpose",
-  db.raw("storage_key as \"storageKey\""),
-  db.raw("file_name as \"fileName\""),
-  db.raw("content_type as \"contentType\""),
-  db.raw("byte_size::float8 as \"byteSize\""),
+  db.raw('storage_key as "storageKey"'),
+  db.raw('file_name as "fileName"'),
+  db.raw('content_type as "contentType"'),
+  db.raw('byte_size::float8 as "byteSize"'),
   "sha256",
-  db.raw("model_id as \"modelId\""),
-  db.raw("item_id as \"itemId\""),
-  db.raw("created_at as \"createdAt\""),
+  db.raw('model_id as "modelId"'),
+  db.raw('item_id as "itemId"'),
+  db.raw('created_at as "createdAt"'),
 ];
 
 export async function insertUpload(crewId: string, upload: NewUpload): Promise<UploadRow> {
@@ -67,5 +67,8 @@ export async function traceAnalysis<T>(crewId: string, id: string): Promise<T | 
 
 export function listUploads(crewId: string, of: { itemId: string } | { modelId: string }): Promise<UploadRow[]> {
   const where = "itemId" in of ? { item_id: of.itemId } : { model_id: of.modelId };
-  return db("uploads").where({ crew_id: crewId, ...where }).orderBy("created_at", "desc").select(columns);
+  return db("uploads")
+    .where({ crew_id: crewId, ...where })
+    .orderBy("created_at", "desc")
+    .select(columns);
 }

@@ -59,7 +59,9 @@ export function sessionsOf(userId: string): Promise<SessionRow[]> {
 }
 
 export async function recordSessionAgent(sessionId: string, userAgent: string | null): Promise<void> {
-  await db("sessions").where({ id: sessionId }).update({ user_agent: userAgent?.slice(0, 300) ?? null });
+  await db("sessions")
+    .where({ id: sessionId })
+    .update({ user_agent: userAgent?.slice(0, 300) ?? null });
 }
 
 export async function deleteSessionOf(userId: string, handle: string): Promise<boolean> {

@@ -29,7 +29,11 @@ export function errorResponse(error: unknown): NextResponse {
   if (error instanceof ZodError) error = invalidInput(error);
   if (error instanceof AccessError) return NextResponse.json({ error: error.message }, { status: error.status });
   if (error instanceof RigInputError) return NextResponse.json({ ...error.toJSON(), fieldErrors: { [error.field]: error.message } }, { status: 400 });
-  if (error instanceof SolveError) return NextResponse.json({ ...error.toJSON(), error: `The engine could not solve this rig: ${error.message}. No figures are given rather than unsure ones.` }, { status: 422 });
+  if (error instanceof SolveError)
+    return NextResponse.json(
+      { ...error.toJSON(), error: `The engine could not solve this rig: ${error.message}. No figures are given rather than unsure ones.` },
+      { status: 422 },
+    );
   if (error instanceof RequestError) {
     return NextResponse.json({ error: error.message, fieldErrors: error.fieldErrors }, { status: error.status, headers: error.headers });
   }

@@ -64,5 +64,10 @@ export async function authorizePage(action: Action, returnTo: string): Promise<C
 
 /** Remembers the crew this browser works in; a choice of a crew one is not in is ignored on read. */
 export async function chooseCrew(crewId: string): Promise<void> {
-  (await cookies()).set(CREW_COOKIE, crewId, { httpOnly: true, sameSite: "lax", path: "/", secure: process.env.COOKIE_SECURE ? process.env.COOKIE_SECURE === "true" : process.env.NODE_ENV === "production" });
+  (await cookies()).set(CREW_COOKIE, crewId, {
+    httpOnly: true,
+    sameSite: "lax",
+    path: "/",
+    secure: process.env.COOKIE_SECURE ? process.env.COOKIE_SECURE === "true" : process.env.NODE_ENV === "production",
+  });
 }

@@ -8,14 +8,27 @@ import { RequestError } from "./http-errors";
 const WINDOW_SECONDS = 15 * 60;
 
 const limiter = (keyPrefix: string, points: number) =>
-  new RateLimiterPostgres({ storeClient: pgPool, storeType: "pool", tableName: "rate_limits", tableCreated: true, keyPrefix, points, duration: WINDOW_SECONDS });
+  new RateLimiterPostgres({
+    storeClient: pgPool,
+    storeType: "pool",
+    tableName: "rate_limits",
+    tableCreated: true,
+    keyPrefix,
+    points,
+    duration: WINDOW_SECONDS,
+  });
 
 const globalForLimits = globalThis as unknown as { spanwrightLimits?: { account: RateLimiterPostgres; address: RateLimiterPostgres } };
 const limits = (globalForLimits.spanwrightLimits ??= { account: limiter("signin_account", 5), address: limiter("signin_address", 20) });
 
 function tooMany(msBeforeNext: number): RequestError {
   const seconds = Math.max(1, Math.ceil(msBeforeNext / 1000));
-  return new RequestError(429, `Too many failed sign-ins. Wait ${Math.ceil(seconds / 60)} minute(s) and try again, or reset your password.`, {}, { "Retry-After": String(seconds) });
+  return new RequestError(
+    429,
+    `Too many failed sign-ins. Wait ${Math.ceil(seconds / 60)} minute(s) and try again, or reset your password.`,
+    {},
+    { "Retry-After": String(seconds) },
+  );
 }
 
 /** Throws 429 with Retry-After when the account or the address has used up its failures. */

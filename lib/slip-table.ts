@@ -40,7 +40,15 @@ export function buildSlipTable(tests: readonly SlipTableTest[]): SlipTable {
   for (const test of tests) {
     devices.set(test.deviceId, test.deviceName);
     const key = cellKey(test.deviceId, test.ropeDiameterMm);
-    const cell = cells.get(key) ?? { deviceId: test.deviceId, ropeDiameterMm: test.ropeDiameterMm, tests: 0, slips: 0, lowestSlipN: null, spreadN: null, highestHeldN: null };
+    const cell = cells.get(key) ?? {
+      deviceId: test.deviceId,
+      ropeDiameterMm: test.ropeDiameterMm,
+      tests: 0,
+      slips: 0,
+      lowestSlipN: null,
+      spreadN: null,
+      highestHeldN: null,
+    };
     cell.tests++;
     if (test.result === "slipped") {
       const highest = cell.lowestSlipN === null ? test.forceN : Math.max(cell.lowestSlipN + (cell.spreadN ?? 0), test.forceN);

@@ -5,7 +5,10 @@ import { GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client } from "@aws-sd
 
 function setting(name: string): string {
   const value = process.env[name];
-  if (!value) throw new Error(`${name} is not set: file storage needs S3_BUCKET, S3_REGION, S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY (and S3_ENDPOINT for a non-AWS store).`);
+  if (!value)
+    throw new Error(
+      `${name} is not set: file storage needs S3_BUCKET, S3_REGION, S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY (and S3_ENDPOINT for a non-AWS store).`,
+    );
   return value;
 }
 

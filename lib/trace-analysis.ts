@@ -50,7 +50,10 @@ export function analyseTrace(trace: ParsedTrace, unit: ForceUnit, dropN: number,
   let peak = -Infinity;
   for (const f of trace.force) if (f > peak) peak = f;
   if (peak < BENCH_FORCE_RANGE_N.min || peak > BENCH_FORCE_RANGE_N.max) {
-    throw new RequestError(422, `The trace peaks at ${formatForce(peak, unit)}, outside what a slip bench measures (${benchRangeIn(unit)}): check the unit you chose.`);
+    throw new RequestError(
+      422,
+      `The trace peaks at ${formatForce(peak, unit)}, outside what a slip bench measures (${benchRangeIn(unit)}): check the unit you chose.`,
+    );
   }
   const onset = detectSlip(trace, dropN, pullEndS);
   const n = trace.time.length;

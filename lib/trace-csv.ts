@@ -23,7 +23,11 @@ const DELIMITER_NAMES: Record<string, string> = { ",": "comma", ";": "semicolon"
 
 /** The separator: a tab or semicolon on every one of the first lines wins over the comma. */
 function detectDelimiter(text: string): string {
-  const lines = text.slice(0, 16 * 1024).split(/\r?\n/).filter((l) => l.trim() !== "").slice(0, 20);
+  const lines = text
+    .slice(0, 16 * 1024)
+    .split(/\r?\n/)
+    .filter((l) => l.trim() !== "")
+    .slice(0, 20);
   if (lines.length > 0 && lines.every((l) => l.includes("\t"))) return "\t";
   if (lines.length > 0 && lines.every((l) => l.includes(";"))) return ";";
   return ",";
@@ -49,13 +53,18 @@ interface Columns {
 }
 
 function columnsFromHeader(header: string[], unit: ForceUnit): Columns {
-  const time = Math.max(0, header.findIndex((h) => TIME_HEADER.test(h)));
+  const time = Math.max(
+    0,
+    header.findIndex((h) => TIME_HEADER.test(h)),
+  );
   const force = header.findIndex((h, i) => i !== time && FORCE_HEADER.test(h));
   const forceIndex = force >= 0 ? force : header.findIndex((_, i) => i !== time);
   if (forceIndex < 0) throw traceError(`The header "${header.join(", ")}" has no force column: a trace needs a time column and a force column.`);
   const written = HEADER_UNIT.exec(header[forceIndex].trim())?.[1];
   if (written && written !== unit) {
-    throw traceError(`The force column is headed "${header[forceIndex].trim()}" (${written}) but you chose ${unit}: choose the unit the load cell recorded in.`);
+    throw traceError(
+      `The force column is headed "${header[forceIndex].trim()}" (${written}) but you chose ${unit}: choose the unit the load cell recorded in.`,
+    );
   }
   return { time, force: forceIndex, timeScale: MILLISECONDS.test(header[time]) ? 1e-3 : 1 };
 }
@@ -121,7 +130,8 @@ export function parseTraceCsv(source: string, unit: ForceUnit): ParsedTrace {
       else if (!Number.isFinite(f) && time.length === 0) {
         problem = `The trace has no numeric force column: row ${line} holds "${row[columns.force]}" where the force should be.`;
       } else if (!Number.isFinite(f)) problem = `Row ${line}: the force "${row[columns.force]}" is not a number.`;
-      else if (!(t > previousTime)) problem = `Row ${line}: the time ${row[columns.time].trim()} is not after the previous row's; times must increase from row to row.`;
+      else if (!(t > previousTime))
+        problem = `Row ${line}: the time ${row[columns.time].trim()} is not after the previous row's; times must increase from row to row.`;
       if (problem) return parser.abort();
       previousTime = t;
       time.push(t);
@@ -130,7 +140,8 @@ export function parseTraceCsv(source: string, unit: ForceUnit): ParsedTrace {
   });
 
   if (problem) throw traceError(problem);
-  if (time.length < 2) throw traceError("The trace has fewer than two rows of numbers: a trace needs a time column and a force column with at least two samples.");
+  if (time.length < 2)
+    throw traceError("The trace has fewer than two rows of numbers: a trace needs a time column and a force column with at least two samples.");
   const finalColumns = columns as Columns | null;
   const finalHeader = header as string[] | null;
   return {

@@ -105,10 +105,10 @@ export async function readUploadForm(request: Request, purpose: UploadPurpose): 
   try {
     form = await request.formData();
   } catch {
-    throw new RequestError(400, "The upload must be sent as multipart/form-data with the file in a field named \"file\".");
+    throw new RequestError(400, 'The upload must be sent as multipart/form-data with the file in a field named "file".');
   }
   const file = form.get("file");
-  if (!(file instanceof File)) throw new RequestError(400, "Choose a file to upload (the form field \"file\" is missing).");
+  if (!(file instanceof File)) throw new RequestError(400, 'Choose a file to upload (the form field "file" is missing).');
   checkFileSize(purpose, file.name, file.size);
   return { form, file, bytes: new Uint8Array(await file.arrayBuffer()) };
 }

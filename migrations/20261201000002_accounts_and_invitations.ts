@@ -4,7 +4,9 @@ import type { Knex } from "knex";
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.alterTable("crews", (t) => {
     // Minimum safety factors per component class; the defaults are common practice, no source.
-    t.jsonb("min_safety_factors").notNullable().defaultTo(JSON.stringify({ webbing: 3, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: 3 }));
+    t.jsonb("min_safety_factors")
+      .notNullable()
+      .defaultTo(JSON.stringify({ webbing: 3, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: 3 }));
     t.boolean("allow_self_sign_off").notNullable().defaultTo(false);
   });
 

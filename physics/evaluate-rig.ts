@@ -94,10 +94,18 @@ function fallHeight(rig: RigInput): number {
   const { fallHeightM, leashLengthM, harnessHeightM } = rig.leashFall;
   if (fallHeightM !== undefined) return fallHeightM;
   if (leashLengthM === undefined || harnessHeightM === undefined) {
-    throw new RigInputError("leashFall", rig.leashFall, "fallHeightM, or both leashLengthM and harnessHeightM (the fall is leash length + harness height above the line)");
+    throw new RigInputError(
+      "leashFall",
+      rig.leashFall,
+      "fallHeightM, or both leashLengthM and harnessHeightM (the fall is leash length + harness height above the line)",
+    );
   }
   if (leashLengthM + harnessHeightM > 100) {
-    throw new RigInputError("leashFall.leashLengthM", leashLengthM, `a leash length that, with the harness height of ${harnessHeightM} m, makes a free fall of at most 100 m`);
+    throw new RigInputError(
+      "leashFall.leashLengthM",
+      leashLengthM,
+      `a leash length that, with the harness height of ${harnessHeightM} m, makes a free fall of at most 100 m`,
+    );
   }
   return leashLengthM + harnessHeightM;
 }
@@ -107,9 +115,14 @@ function fallPosition(rig: RigInput, walkerX: number): number {
   const given = rig.leashFall.positionFraction;
   const x = given === undefined ? walkerX : given * rig.spanM;
   if (x > 0 && x < rig.spanM) return x;
-  if (given !== undefined) throw new RigInputError("leashFall.positionFraction", given, "a fraction of the span strictly between 0 and 1: the line cannot deflect at an anchor");
+  if (given !== undefined)
+    throw new RigInputError("leashFall.positionFraction", given, "a fraction of the span strictly between 0 and 1: the line cannot deflect at an anchor");
   const field = rig.walker.positionM === undefined ? "walker.positionFraction" : "walker.positionM";
-  throw new RigInputError(field, rig.walker.positionM ?? rig.walker.positionFraction, "a position between the anchors, or a leash-fall position (leashFall.positionFraction, between 0 and 1) when the walker stands at an anchor");
+  throw new RigInputError(
+    field,
+    rig.walker.positionM ?? rig.walker.positionFraction,
+    "a position between the anchors, or a leash-fall position (leashFall.positionFraction, between 0 and 1) when the walker stands at an anchor",
+  );
 }
 
 /** Evaluates a rig: tensions, sag, sweep, leash fall, pulley system, brake, anchors and safety factors. */
@@ -176,10 +189,14 @@ export function evaluateRig(input: unknown): RigResult {
 
   const extrapolated = peakLine > line.curve.lastMeasuredTension;
   if (extrapolated) {
-    warnings.push(`Peak tension ${roundUp(peakLine / 1000)} kN is beyond the stretch curve's last measured point (${(line.curve.lastMeasuredTension / 1000).toFixed(2)} kN): the curve is extrapolated with its last stiffness.`);
+    warnings.push(
+      `Peak tension ${roundUp(peakLine / 1000)} kN is beyond the stretch curve's last measured point (${(line.curve.lastMeasuredTension / 1000).toFixed(2)} kN): the curve is extrapolated with its last stiffness.`,
+    );
   }
   for (const f of factors.filter((f) => !f.passes)) {
-    warnings.push(`${f.name} (${f.location === "line" ? "line" : `anchor ${f.location}`}): safety factor ${f.shown} is below the crew minimum of ${f.minimum}.`);
+    warnings.push(
+      `${f.name} (${f.location === "line" ? "line" : `anchor ${f.location}`}): safety factor ${f.shown} is below the crew minimum of ${f.minimum}.`,
+    );
   }
   if (brake.verdict !== "holds") warnings.push(brake.message);
   for (const side of ["a", "b"] as const) {

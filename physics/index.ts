@@ -1,7 +1,18 @@
 export { ENGINE_VERSION } from "./version";
 export { RigInputError } from "./rig-input-error";
 export { SolveError } from "./solve-error";
-export { STANDARD_GRAVITY, toNewtons, fromNewtons, toMetres, fromMetres, toKilograms, fromKilograms, type ForceUnit, type LengthUnit, type MassUnit } from "./units";
+export {
+  STANDARD_GRAVITY,
+  toNewtons,
+  fromNewtons,
+  toMetres,
+  fromMetres,
+  toKilograms,
+  fromKilograms,
+  type ForceUnit,
+  type LengthUnit,
+  type MassUnit,
+} from "./units";
 export { createStretchCurve, strainAt, tensionAtStrain, pieceAt, type StretchCurve, type StretchPoint } from "./stretch-curve";
 export { lineIntegrals, type LineIntegrals } from "./line-integrals";
 export { lineEquations, segmentEnds, VARIABLE_NAMES, type Line, type LineVariables, type LineEquation, type VariableName } from "./line-equations";
@@ -20,7 +31,14 @@ export { lineForceDeflection, type LineForceDeflection } from "./line-force-defl
 export { analysePulleySystem, checkPulleySystem, type PulleySystem, type PulleyAnalysis, type BrakeLocation } from "./pulley-system";
 export { checkBrake, type BrakeCheck, type SlipResult } from "./brake-check";
 export { anchorLoads, type AnchorLayout, type AnchorLoads } from "./bridle";
-export { safetyFactors, COMPONENT_CATEGORIES, DEFAULT_MINIMUM_FACTORS, type ComponentCategory, type LoadedComponent, type SafetyFactor } from "./safety-factors";
+export {
+  safetyFactors,
+  COMPONENT_CATEGORIES,
+  DEFAULT_MINIMUM_FACTORS,
+  type ComponentCategory,
+  type LoadedComponent,
+  type SafetyFactor,
+} from "./safety-factors";
 export { detectSlip, type Trace, type SlipOnset } from "./slip-detection";
 export { CAUTIONS } from "./cautions";
 export { RigInputSchema, type RigInput, type RigInputDraft } from "./rig-schema";

@@ -39,7 +39,15 @@ export function segmentEnds(line: Line, v: LineVariables) {
   const Vp = Vm + v.load;
   const Ve = v.VA + line.weight * v.length + v.load;
   const { curve } = line;
-  return { Vm, Vp, Ve, i0: lineIntegrals(curve, v.H, v.VA), im: lineIntegrals(curve, v.H, Vm), ip: lineIntegrals(curve, v.H, Vp), ie: lineIntegrals(curve, v.H, Ve) };
+  return {
+    Vm,
+    Vp,
+    Ve,
+    i0: lineIntegrals(curve, v.H, v.VA),
+    im: lineIntegrals(curve, v.H, Vm),
+    ip: lineIntegrals(curve, v.H, Vp),
+    ie: lineIntegrals(curve, v.H, Ve),
+  };
 }
 
 export const VARIABLE_NAMES = ["H", "VA", "loadArc", "load", "length"] as const;
@@ -47,11 +55,7 @@ export type VariableName = (typeof VARIABLE_NAMES)[number];
 
 /** One condition the equilibrium must meet. */
 export type LineEquation =
-  | { kind: "span" }
-  | { kind: "rise" }
-  | { kind: "loadX"; x: number }
-  | { kind: "loadY"; y: number }
-  | { kind: "tension"; anchor: "a" | "b"; tension: number };
+  { kind: "span" } | { kind: "rise" } | { kind: "loadX"; x: number } | { kind: "loadY"; y: number } | { kind: "tension"; anchor: "a" | "b"; tension: number };
 
 /**
  * Residuals of the chosen conditions and their exact Jacobian (columns in VARIABLE_NAMES order).

@@ -36,11 +36,18 @@ function stageHaulingAdvantage(ratio: number, efficiency: number): number {
 
 export function checkPulleySystem(system: PulleySystem): void {
   if (!Array.isArray(system.stages) || system.stages.length === 0) throw new RigInputError("tensioning.stages", system.stages, "at least one stage");
-  system.stages.forEach((n, i) => checkNumber(`tensioning.stages.${i}.ratio`, n, (v) => Number.isInteger(v) && v >= 1 && v <= 20, "a whole number from 1 to 20 (n of an n:1 stage)"));
+  system.stages.forEach((n, i) =>
+    checkNumber(`tensioning.stages.${i}.ratio`, n, (v) => Number.isInteger(v) && v >= 1 && v <= 20, "a whole number from 1 to 20 (n of an n:1 stage)"),
+  );
   checkNumber("tensioning.sheaveEfficiency", system.sheaveEfficiency, (v) => v > 0 && v <= 1, "a fraction > 0 and ≤ 1");
   if (system.brake.on === "stage") {
     const last = system.stages.length - 1;
-    checkNumber("tensioning.brake.stage", system.brake.stage, (v) => Number.isInteger(v) && v >= 0 && v <= last, `a stage index from 0 (the stage on the line) to ${last}`);
+    checkNumber(
+      "tensioning.brake.stage",
+      system.brake.stage,
+      (v) => Number.isInteger(v) && v >= 0 && v <= last,
+      `a stage index from 0 (the stage on the line) to ${last}`,
+    );
   }
 }
 

@@ -5,7 +5,11 @@ import { MAX_SPAN } from "./solve-line";
 // Every message is the "allowed" half of the error the user sees.
 const number = (allowed: string) => z.number({ error: allowed });
 const positive = (allowed: string) => number(allowed).gt(0, allowed);
-const name = (what: string) => z.string({ error: `${what} (text)` }).trim().min(1, `${what} (text)`);
+const name = (what: string) =>
+  z
+    .string({ error: `${what} (text)` })
+    .trim()
+    .min(1, `${what} (text)`);
 
 const stretchPoint = z.object({
   tensionKN: number("a tension ≥ 0 kN").gte(0, "a tension ≥ 0 kN"),
@@ -35,84 +39,101 @@ const anchor = z.object({
   components: z.array(component, { error: "a list of components" }).default([]),
 });
 
-const minimum = (category: keyof typeof DEFAULT_MINIMUM_FACTORS) =>
-  positive("a minimum safety factor > 0").default(DEFAULT_MINIMUM_FACTORS[category]);
+const minimum = (category: keyof typeof DEFAULT_MINIMUM_FACTORS) => positive("a minimum safety factor > 0").default(DEFAULT_MINIMUM_FACTORS[category]);
 
 /** The inputs of one rig, SI units throughout (N, m, kg) except the stretch points (kN, %), as measured. */
-export const RigInputSchema = z
-  .object({
-    name: z.string().optional(),
-    spanM: positive(`a horizontal span > 0 m and ≤ ${MAX_SPAN} m`).lte(MAX_SPAN, `a horizontal span > 0 m and ≤ ${MAX_SPAN} m`),
-    /** Height of anchor B above anchor A, m (negative if B is lower). */
-    heightDifferenceM: number("a height difference in m (B above A positive)").default(0),
-    mainline: z.object({
+export const RigInputSchema = z.object({
+  name: z.string().optional(),
+  spanM: positive(`a horizontal span > 0 m and ≤ ${MAX_SPAN} m`).lte(MAX_SPAN, `a horizontal span > 0 m and ≤ ${MAX_SPAN} m`),
+  /** Height of anchor B above anchor A, m (negative if B is lower). */
+  heightDifferenceM: number("a height difference in m (B above A positive)").default(0),
+  mainline: z.object({
+    name: name("a webbing name"),
+    massPerMetreKg: positive("a mass per metre > 0 kg/m"),
+    mbsN: positive("a minimum breaking strength > 0 N"),
+    stretchPoints: z.array(stretchPoint, { error: "a list of { tensionKN, elongationPct } points" }).min(2, "at least two points, the first at 0 kN and 0 %"),
+  }),
+  /** A backup that rides along adds its weight; it carries no tension until the mainline fails. */
+  backup: z
+    .object({
       name: name("a webbing name"),
       massPerMetreKg: positive("a mass per metre > 0 kg/m"),
       mbsN: positive("a minimum breaking strength > 0 N"),
-      stretchPoints: z.array(stretchPoint, { error: "a list of { tensionKN, elongationPct } points" }).min(2, "at least two points, the first at 0 kN and 0 %"),
-    }),
-    /** A backup that rides along adds its weight; it carries no tension until the mainline fails. */
-    backup: z
-      .object({
-        name: name("a webbing name"),
-        massPerMetreKg: positive("a mass per metre > 0 kg/m"),
-        mbsN: positive("a minimum breaking strength > 0 N"),
-        ridesAlong: z.boolean({ error: "true or false" }),
-      })
+      ridesAlong: z.boolean({ error: "true or false" }),
+    })
+    .optional(),
+  /** Pretension read at one anchor with nobody on the line. */
+  pretension: z.object({
+    forceN: positive("a pretension > 0 N, below the mainline's MBS"),
+    readAt: z.enum(["a", "b"], { error: '"a" or "b"' }),
+  }),
+  walker: z.object({
+    massKg: positive("a mass > 0 kg"),
+    /** Horizontal position from anchor A: a fraction of the span, or metres (give one; default mid-span). */
+    positionFraction: number("a fraction of the span from 0 to 1")
+      .gte(0, "a fraction of the span from 0 to 1")
+      .lte(1, "a fraction of the span from 0 to 1")
       .optional(),
-    /** Pretension read at one anchor with nobody on the line. */
-    pretension: z.object({
-      forceN: positive("a pretension > 0 N, below the mainline's MBS"),
-      readAt: z.enum(["a", "b"], { error: '"a" or "b"' }),
-    }),
-    walker: z.object({
-      massKg: positive("a mass > 0 kg"),
-      /** Horizontal position from anchor A: a fraction of the span, or metres (give one; default mid-span). */
-      positionFraction: number("a fraction of the span from 0 to 1").gte(0, "a fraction of the span from 0 to 1").lte(1, "a fraction of the span from 0 to 1").optional(),
-      positionM: number("a distance from anchor A ≥ 0 m, within the span").gte(0, "a distance from anchor A ≥ 0 m, within the span").optional(),
-    }),
-    leashFall: z.object({
-      leashLengthM: number("a leash length ≥ 0 m").gte(0, "a leash length ≥ 0 m").optional(),
-      harnessHeightM: number("a harness height above the line ≥ 0 m").gte(0, "a harness height above the line ≥ 0 m").optional(),
-      /** Free fall before the line takes the load; default leash length + harness height. */
-      fallHeightM: number("a free-fall height from 0 m to 100 m").gte(0, "a free-fall height from 0 m to 100 m").lte(100, "a free-fall height from 0 m to 100 m").optional(),
-      /** Fall position as a fraction of the span from A; default the walker's position. */
-      positionFraction: number("a fraction of the span from 0 to 1").gte(0, "a fraction of the span from 0 to 1").lte(1, "a fraction of the span from 0 to 1").optional(),
-    }),
-    anchors: z.object({ a: anchor, b: anchor }),
-    tensioning: z.object({
-      /** Stage 0 pulls on the line; each further stage hauls the previous stage's tail. */
-      stages: z
-        .array(z.object({ ratio: number("a whole number from 1 to 20").int("a whole number from 1 to 20").gte(1, "a whole number from 1 to 20").lte(20, "a whole number from 1 to 20") }))
-        .min(1, "at least one stage"),
-      sheaveEfficiency: positive("a sheave efficiency > 0 and ≤ 1").lte(1, "a sheave efficiency > 0 and ≤ 1"),
-      brake: z.discriminatedUnion(
-        "on",
-        [z.object({ on: z.literal("tail") }), z.object({ on: z.literal("stage"), stage: number("a stage index (0 = the stage on the line)").int("a whole stage index").gte(0, "a stage index ≥ 0") })],
-        { error: '{ "on": "tail" } or { "on": "stage", "stage": index }' },
-      ),
-      pullPerPersonN: positive("a pull per person > 0 N"),
-    }),
-    brake: z.object({
-      device: name("a brake device name"),
-      ropeDiameterMm: positive("a rope diameter > 0 mm"),
-    }),
-    /** The crew's slip bench: "held" means the test stopped without a slip, so forceN is only a lower bound. */
-    slipBench: z
+    positionM: number("a distance from anchor A ≥ 0 m, within the span").gte(0, "a distance from anchor A ≥ 0 m, within the span").optional(),
+  }),
+  leashFall: z.object({
+    leashLengthM: number("a leash length ≥ 0 m").gte(0, "a leash length ≥ 0 m").optional(),
+    harnessHeightM: number("a harness height above the line ≥ 0 m").gte(0, "a harness height above the line ≥ 0 m").optional(),
+    /** Free fall before the line takes the load; default leash length + harness height. */
+    fallHeightM: number("a free-fall height from 0 m to 100 m")
+      .gte(0, "a free-fall height from 0 m to 100 m")
+      .lte(100, "a free-fall height from 0 m to 100 m")
+      .optional(),
+    /** Fall position as a fraction of the span from A; default the walker's position. */
+    positionFraction: number("a fraction of the span from 0 to 1")
+      .gte(0, "a fraction of the span from 0 to 1")
+      .lte(1, "a fraction of the span from 0 to 1")
+      .optional(),
+  }),
+  anchors: z.object({ a: anchor, b: anchor }),
+  tensioning: z.object({
+    /** Stage 0 pulls on the line; each further stage hauls the previous stage's tail. */
+    stages: z
       .array(
         z.object({
-          device: name("a device name"),
-          ropeDiameterMm: positive("a rope diameter > 0 mm"),
-          result: z.enum(["slipped", "held"], { error: '"slipped" or "held"' }),
-          forceN: positive("a force > 0 N"),
+          ratio: number("a whole number from 1 to 20")
+            .int("a whole number from 1 to 20")
+            .gte(1, "a whole number from 1 to 20")
+            .lte(20, "a whole number from 1 to 20"),
         }),
       )
-      .default([]),
-    /** The crew's minimum safety factors; defaults are common practice, no source. */
-    minimumSafetyFactors: z
-      .object({ webbing: minimum("webbing"), connector: minimum("connector"), sling: minimum("sling"), anchor: minimum("anchor"), other: minimum("other") })
-      .prefault({}),
-  });
+      .min(1, "at least one stage"),
+    sheaveEfficiency: positive("a sheave efficiency > 0 and ≤ 1").lte(1, "a sheave efficiency > 0 and ≤ 1"),
+    brake: z.discriminatedUnion(
+      "on",
+      [
+        z.object({ on: z.literal("tail") }),
+        z.object({ on: z.literal("stage"), stage: number("a stage index (0 = the stage on the line)").int("a whole stage index").gte(0, "a stage index ≥ 0") }),
+      ],
+      { error: '{ "on": "tail" } or { "on": "stage", "stage": index }' },
+    ),
+    pullPerPersonN: positive("a pull per person > 0 N"),
+  }),
+  brake: z.object({
+    device: name("a brake device name"),
+    ropeDiameterMm: positive("a rope diameter > 0 mm"),
+  }),
+  /** The crew's slip bench: "held" means the test stopped without a slip, so forceN is only a lower bound. */
+  slipBench: z
+    .array(
+      z.object({
+        device: name("a device name"),
+        ropeDiameterMm: positive("a rope diameter > 0 mm"),
+        result: z.enum(["slipped", "held"], { error: '"slipped" or "held"' }),
+        forceN: positive("a force > 0 N"),
+      }),
+    )
+    .default([]),
+  /** The crew's minimum safety factors; defaults are common practice, no source. */
+  minimumSafetyFactors: z
+    .object({ webbing: minimum("webbing"), connector: minimum("connector"), sling: minimum("sling"), anchor: minimum("anchor"), other: minimum("other") })
+    .prefault({}),
+});
 
 /** What the app sends (defaults optional). */
 export type RigInputDraft = z.input<typeof RigInputSchema>;

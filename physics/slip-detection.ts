@@ -7,9 +7,7 @@ export interface Trace {
   force: ArrayLike<number>;
 }
 
-export type SlipOnset =
-  | { kind: "slipped"; forceN: number; timeS: number; index: number }
-  | { kind: "held"; forceN: number; timeS: number; index: number };
+export type SlipOnset = { kind: "slipped"; forceN: number; timeS: number; index: number } | { kind: "held"; forceN: number; timeS: number; index: number };
 
 /**
  * Slip onset: the running maximum at the first sample that falls more than `drop` (N) below it,

@@ -86,7 +86,11 @@ export function solveLine(line: Line, length: number, load: PointLoad, breakingS
   checkNumber("breakingStrength", breakingStrength, (v) => v > 0, "a breaking strength > 0 N");
   const minimum = shortestLength(line, breakingStrength);
   if (!(length >= minimum) || !Number.isFinite(length)) {
-    throw new RigInputError("unstretchedLength", length, `at least ${minimum.toFixed(3)} m: any shorter and the line would stretch past its breaking strength just to reach the anchors`);
+    throw new RigInputError(
+      "unstretchedLength",
+      length,
+      `at least ${minimum.toFixed(3)} m: any shorter and the line would stretch past its breaking strength just to reach the anchors`,
+    );
   }
   const guess = start ? { ...start, length, load: load.force } : shallowCableGuess(line, length, load.force, load.x);
   const { variables, iterations } = solveEquilibrium(

@@ -43,10 +43,18 @@ export function createStretchCurve(points: readonly StretchPoint[], field = "str
   }
   for (let i = 1; i < points.length; i++) {
     if (!(points[i].tensionKN > points[i - 1].tensionKN)) {
-      throw new RigInputError(`${field}.${i}.tensionKN`, points[i].tensionKN, `more than the previous point's ${points[i - 1].tensionKN} kN (tensions strictly increasing)`);
+      throw new RigInputError(
+        `${field}.${i}.tensionKN`,
+        points[i].tensionKN,
+        `more than the previous point's ${points[i - 1].tensionKN} kN (tensions strictly increasing)`,
+      );
     }
     if (!(points[i].elongationPct > points[i - 1].elongationPct)) {
-      throw new RigInputError(`${field}.${i}.elongationPct`, points[i].elongationPct, `more than the previous point's ${points[i - 1].elongationPct} % (elongation strictly increasing)`);
+      throw new RigInputError(
+        `${field}.${i}.elongationPct`,
+        points[i].elongationPct,
+        `more than the previous point's ${points[i - 1].elongationPct} % (elongation strictly increasing)`,
+      );
     }
   }
   const tensions = points.map((p) => p.tensionKN * 1000);

@@ -70,7 +70,11 @@ async function playwright(env: NodeJS.ProcessEnv, reportDir: string): Promise<vo
 }
 
 function summarise(): number {
-  const total = tallies.reduce((t, x) => ({ passed: t.passed + x.passed, failed: t.failed + x.failed, skipped: t.skipped + x.skipped }), { passed: 0, failed: 0, skipped: 0 });
+  const total = tallies.reduce((t, x) => ({ passed: t.passed + x.passed, failed: t.failed + x.failed, skipped: t.skipped + x.skipped }), {
+    passed: 0,
+    failed: 0,
+    skipped: 0,
+  });
   console.log("\n── summary ──");
   for (const t of tallies) console.log(`  ${t.suite.padEnd(12)} ${t.passed} passed, ${t.failed} failed${t.skipped ? `, ${t.skipped} skipped` : ""}`);
   console.log(`tests: ${total.passed} passed, ${total.failed} failed${total.skipped ? `, ${total.skipped} skipped` : ""}`);
@@ -86,6 +90,7 @@ async function main(): Promise<number> {
     Object.entries({ ...process.env, ...stack.env, NEXT_DIST_DIR: ".next-test" }).filter(([name]) => name !== "NODE_ENV"),
   ) as NodeJS.ProcessEnv;
   await check("lint", bin("eslint"), ["."]);
+  await check("format", bin("prettier"), ["--check", "."]);
   await check("typecheck", bin("tsc"), ["--noEmit"]);
   await vitest("unit", testEnv, reportDir);
   const built = await check("build", bin("next"), ["build"], { ...testEnv, NODE_ENV: "production" });

@@ -23,11 +23,41 @@ const ropeCurve = [
 ];
 
 const MODELS = [
-  { key: "ridgeback", kind: "webbing", name: "Ridgeback 25 Tubular", specs: { widthMm: 25, massPerMetreG: 48, mbsKN: 32, stretchPoints: webbingCurve }, notes: "Main longline webbing." },
-  { key: "lumen", kind: "webbing", name: "Lumen Flat 25", specs: { widthMm: 25, massPerMetreG: 39, mbsKN: 28, stretchPoints: webbingCurve.map((p) => ({ ...p, elongationPct: p.elongationPct * 1.2 })) }, notes: "" },
-  { key: "quarry11", kind: "rope", name: "Quarrystatic 11", specs: { diameterMm: 11, construction: "static", mbsKN: 30, massPerMetreG: 78, stretchPoints: ropeCurve }, notes: "Tensioning rope." },
-  { key: "quarry105", kind: "rope", name: "Quarrystatic 10.5", specs: { diameterMm: 10.5, construction: "static", mbsKN: 27, massPerMetreG: 70, stretchPoints: ropeCurve }, notes: "" },
-  { key: "talus", kind: "brake", name: "Talus Cam Brake", specs: { minRopeMm: 9, maxRopeMm: 12, mbsKN: 22 }, notes: "Toothed cam; inspect the teeth before each rig." },
+  {
+    key: "ridgeback",
+    kind: "webbing",
+    name: "Ridgeback 25 Tubular",
+    specs: { widthMm: 25, massPerMetreG: 48, mbsKN: 32, stretchPoints: webbingCurve },
+    notes: "Main longline webbing.",
+  },
+  {
+    key: "lumen",
+    kind: "webbing",
+    name: "Lumen Flat 25",
+    specs: { widthMm: 25, massPerMetreG: 39, mbsKN: 28, stretchPoints: webbingCurve.map((p) => ({ ...p, elongationPct: p.elongationPct * 1.2 })) },
+    notes: "",
+  },
+  {
+    key: "quarry11",
+    kind: "rope",
+    name: "Quarrystatic 11",
+    specs: { diameterMm: 11, construction: "static", mbsKN: 30, massPerMetreG: 78, stretchPoints: ropeCurve },
+    notes: "Tensioning rope.",
+  },
+  {
+    key: "quarry105",
+    kind: "rope",
+    name: "Quarrystatic 10.5",
+    specs: { diameterMm: 10.5, construction: "static", mbsKN: 27, massPerMetreG: 70, stretchPoints: ropeCurve },
+    notes: "",
+  },
+  {
+    key: "talus",
+    kind: "brake",
+    name: "Talus Cam Brake",
+    specs: { minRopeMm: 9, maxRopeMm: 12, mbsKN: 22 },
+    notes: "Toothed cam; inspect the teeth before each rig.",
+  },
   { key: "wren", kind: "brake", name: "Wren Smooth Capture", specs: { minRopeMm: 10, maxRopeMm: 11.5, mbsKN: 18 }, notes: "" },
   { key: "scree", kind: "line_grip", name: "Scree Line Grip", specs: { minRopeMm: 10, maxRopeMm: 12, mbsKN: 15 }, notes: "" },
   { key: "kestrel", kind: "pulley", name: "Kestrel 50 Pulley", specs: { sheaveDiameterMm: 50, efficiency: 0.93, mbsKN: 36 }, notes: "Ball-bearing sheave." },
@@ -59,7 +89,9 @@ export async function seed(knex: Knex): Promise<void> {
   await knex.transaction(async (trx) => {
     const ids: Record<string, string> = {};
     for (const m of MODELS) {
-      const [{ id }] = await trx("gear_models").insert({ crew_id: crew.id, kind: m.kind, name: m.name, specs: JSON.stringify(m.specs), notes: m.notes }).returning("id");
+      const [{ id }] = await trx("gear_models")
+        .insert({ crew_id: crew.id, kind: m.kind, name: m.name, specs: JSON.stringify(m.specs), notes: m.notes })
+        .returning("id");
       ids[m.key] = id;
     }
     const items = [
@@ -71,9 +103,23 @@ export async function seed(knex: Knex): Promise<void> {
     ];
     for (const item of items) {
       const [{ id }] = await trx("gear_items")
-        .insert({ crew_id: crew.id, model_id: ids[item.model], label: item.label, in_service_since: item.since, retired_on: item.retiredOn ?? null, retired_reason: item.reason ?? null })
+        .insert({
+          crew_id: crew.id,
+          model_id: ids[item.model],
+          label: item.label,
+          in_service_since: item.since,
+          retired_on: item.retiredOn ?? null,
+          retired_reason: item.reason ?? null,
+        })
         .returning("id");
-      await trx("gear_inspections").insert({ crew_id: crew.id, item_id: id, inspected_by: tester.id, inspected_on: "2026-10-04", result: item.retiredOn ? "fail" : "pass", notes: item.retiredOn ? "Cut through the edge fibres." : "" });
+      await trx("gear_inspections").insert({
+        crew_id: crew.id,
+        item_id: id,
+        inspected_by: tester.id,
+        inspected_on: "2026-10-04",
+        result: item.retiredOn ? "fail" : "pass",
+        notes: item.retiredOn ? "Cut through the edge fibres." : "",
+      });
     }
 
     const tests = [
@@ -98,7 +144,17 @@ export async function seed(knex: Knex): Promise<void> {
         // `npm start` and `npm test` seed with the S3 fake running; `db:seed` alone stores no bytes unless S3_BUCKET is set.
         if (storeBytes) await putObject(storageKey, bytes, "text/csv", sha256);
         const [{ id }] = await trx("uploads")
-          .insert({ crew_id: crew.id, purpose: "trace", storage_key: storageKey, file_name: `${test.device}-${test.d}mm-pull.csv`, content_type: "text/csv", byte_size: bytes.byteLength, sha256, analysis: JSON.stringify(analysis), uploaded_by: tester.id })
+          .insert({
+            crew_id: crew.id,
+            purpose: "trace",
+            storage_key: storageKey,
+            file_name: `${test.device}-${test.d}mm-pull.csv`,
+            content_type: "text/csv",
+            byte_size: bytes.byteLength,
+            sha256,
+            analysis: JSON.stringify(analysis),
+            uploaded_by: tester.id,
+          })
           .returning("id");
         traceUploadId = id;
         detected = analysis.onset;

@@ -46,12 +46,14 @@ export function PasswordForm() {
   return (
     <form onSubmit={submit} noValidate className="max-w-md space-y-4">
       <FormError message={formError} />
-      <Field label="Current password" type="password" autoComplete="current-password" error={form.formState.errors.currentPassword?.message} {...form.register("currentPassword")} />
-      <NewPasswordField
-        label="New password"
-        error={form.formState.errors.newPassword?.message}
-        {...form.register("newPassword")}
+      <Field
+        label="Current password"
+        type="password"
+        autoComplete="current-password"
+        error={form.formState.errors.currentPassword?.message}
+        {...form.register("currentPassword")}
       />
+      <NewPasswordField label="New password" error={form.formState.errors.newPassword?.message} {...form.register("newPassword")} />
       <Button type="submit" disabled={form.formState.isSubmitting}>
         Change password
       </Button>

@@ -32,7 +32,16 @@ export function SessionsList({ sessions }: { sessions: SessionItem[] }) {
         rows={sessions}
         rowKey={(s) => s.handle}
         columns={[
-          { key: "device", header: "Browser", cell: (s) => <span className="break-all">{s.userAgent ?? "Unknown browser"}{s.current ? " (this device)" : ""}</span> },
+          {
+            key: "device",
+            header: "Browser",
+            cell: (s) => (
+              <span className="break-all">
+                {s.userAgent ?? "Unknown browser"}
+                {s.current ? " (this device)" : ""}
+              </span>
+            ),
+          },
           { key: "since", header: "Signed in", cell: (s) => when(s.createdAt) },
           {
             key: "actions",

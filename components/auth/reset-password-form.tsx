@@ -25,11 +25,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
     <form onSubmit={submit} noValidate className="space-y-4">
       <FormError message={formError ?? form.formState.errors.token?.message ?? null} />
       <input type="hidden" {...form.register("token")} />
-      <NewPasswordField
-        label="New password"
-        error={form.formState.errors.password?.message}
-        {...form.register("password")}
-      />
+      <NewPasswordField label="New password" error={form.formState.errors.password?.message} {...form.register("password")} />
       <Button type="submit" className="w-full" disabled={form.formState.isSubmitting}>
         Save the new password
       </Button>

@@ -21,11 +21,7 @@ export function SignUpForm({ next }: { next: string }) {
       <FormError message={formError} />
       <Field label="Your name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
       <Field label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
-      <NewPasswordField
-        label="Password"
-        error={errors.password?.message}
-        {...form.register("password")}
-      />
+      <NewPasswordField label="Password" error={errors.password?.message} {...form.register("password")} />
       <Button type="submit" className="w-full" disabled={isSubmitting}>
         Create account
       </Button>

@@ -18,19 +18,34 @@ export function SlipLoadChart({ id, tests, devices }: { id: string; tests: SlipT
   const x = linearScale([Math.min(...diameters) - 0.5, Math.max(...diameters) + 0.5], [M.left, W - M.right]);
   const y = linearScale([0, Math.max(...forces) * 1.1], [H - M.bottom, M.top]);
   return (
-    <svg id={id} xmlns="http://www.w3.org/2000/svg" viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Chart of slip load against rope diameter for each device" className="h-auto w-full bg-white">
+    <svg
+      id={id}
+      xmlns="http://www.w3.org/2000/svg"
+      viewBox={`0 0 ${W} ${H}`}
+      role="img"
+      aria-label="Chart of slip load against rope diameter for each device"
+      className="h-auto w-full bg-white"
+    >
       <rect width={W} height={H} fill="white" />
       {niceTicks(0, Math.max(...forces) * 1.1).map((t) => (
         <g key={`y${t}`}>
           <line x1={M.left} x2={W - M.right} y1={y(t)} y2={y(t)} stroke="#e6eaef" />
-          <text x={M.left - 6} y={y(t) + 4} textAnchor="end" fontSize="12" fill="#3a485a">{t}</text>
+          <text x={M.left - 6} y={y(t) + 4} textAnchor="end" fontSize="12" fill="#3a485a">
+            {t}
+          </text>
         </g>
       ))}
       {[...new Set(diameters)].map((d) => (
-        <text key={`x${d}`} x={x(d)} y={H - M.bottom + 18} textAnchor="middle" fontSize="12" fill="#3a485a">{d}</text>
+        <text key={`x${d}`} x={x(d)} y={H - M.bottom + 18} textAnchor="middle" fontSize="12" fill="#3a485a">
+          {d}
+        </text>
       ))}
-      <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle" fontSize="13" fill="#1d2632">Rope diameter (mm)</text>
-      <text x={14} y={(M.top + H - M.bottom) / 2} textAnchor="middle" fontSize="13" fill="#1d2632" transform={`rotate(-90 14 ${(M.top + H - M.bottom) / 2})`}>Slip load (kN)</text>
+      <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle" fontSize="13" fill="#1d2632">
+        Rope diameter (mm)
+      </text>
+      <text x={14} y={(M.top + H - M.bottom) / 2} textAnchor="middle" fontSize="13" fill="#1d2632" transform={`rotate(-90 14 ${(M.top + H - M.bottom) / 2})`}>
+        Slip load (kN)
+      </text>
       {devices.map((device, i) => {
         const colour = SERIES[i % SERIES.length];
         const own = tests.filter((t) => t.deviceId === device.id);
@@ -39,7 +54,9 @@ export function SlipLoadChart({ id, tests, devices }: { id: string; tests: SlipT
           .map((d) => [d, Math.min(...own.filter((t) => t.result === "slipped" && t.ropeDiameterMm === d).map((t) => fromNewtons(t.forceN, "kN")))] as const);
         return (
           <g key={device.id}>
-            {lowest.length > 1 ? <path d={lowest.map(([d, f], j) => `${j ? "L" : "M"}${x(d)},${y(f)}`).join("")} fill="none" stroke={colour} strokeWidth="1.5" /> : null}
+            {lowest.length > 1 ? (
+              <path d={lowest.map(([d, f], j) => `${j ? "L" : "M"}${x(d)},${y(f)}`).join("")} fill="none" stroke={colour} strokeWidth="1.5" />
+            ) : null}
             {own.map((t) =>
               t.result === "slipped" ? (
                 <circle key={t.id} cx={x(t.ropeDiameterMm)} cy={y(fromNewtons(t.forceN, "kN"))} r="5" fill={colour} />
@@ -48,15 +65,21 @@ export function SlipLoadChart({ id, tests, devices }: { id: string; tests: SlipT
               ),
             )}
             <circle cx={W - M.right + 20} cy={M.top + 10 + i * 22} r="5" fill={colour} />
-            <text x={W - M.right + 32} y={M.top + 14 + i * 22} fontSize="12" fill="#1d2632">{device.name}</text>
+            <text x={W - M.right + 32} y={M.top + 14 + i * 22} fontSize="12" fill="#1d2632">
+              {device.name}
+            </text>
           </g>
         );
       })}
       <g transform={`translate(${W - M.right + 14} ${H - M.bottom - 40})`} fontSize="12" fill="#1d2632">
         <circle cx="6" cy="0" r="5" fill="#3a485a" />
-        <text x="18" y="4">slipped at</text>
+        <text x="18" y="4">
+          slipped at
+        </text>
         <path d="M6,14l6,10h-12z" fill="white" stroke="#3a485a" strokeWidth="2" />
-        <text x="18" y="24">held to (at least)</text>
+        <text x="18" y="24">
+          held to (at least)
+        </text>
       </g>
     </svg>
   );

@@ -30,14 +30,22 @@ export function TraceChart({ time, force, unit, onset }: TraceChartProps) {
         {niceTicks(bottom, top * 1.05).map((t) => (
           <g key={`y${t}`}>
             <line x1={M.left} x2={W - M.right} y1={y(t)} y2={y(t)} stroke="#e6eaef" />
-            <text x={M.left - 6} y={y(t) + 4} textAnchor="end" fontSize="12" fill="#3a485a">{t}</text>
+            <text x={M.left - 6} y={y(t) + 4} textAnchor="end" fontSize="12" fill="#3a485a">
+              {t}
+            </text>
           </g>
         ))}
         {niceTicks(time[0], time[time.length - 1]).map((t) => (
-          <text key={`x${t}`} x={x(t)} y={H - M.bottom + 18} textAnchor="middle" fontSize="12" fill="#3a485a">{t}</text>
+          <text key={`x${t}`} x={x(t)} y={H - M.bottom + 18} textAnchor="middle" fontSize="12" fill="#3a485a">
+            {t}
+          </text>
         ))}
-        <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle" fontSize="13" fill="#1d2632">Time (s)</text>
-        <text x={14} y={(M.top + H - M.bottom) / 2} textAnchor="middle" fontSize="13" fill="#1d2632" transform={`rotate(-90 14 ${(M.top + H - M.bottom) / 2})`}>Force ({unit})</text>
+        <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle" fontSize="13" fill="#1d2632">
+          Time (s)
+        </text>
+        <text x={14} y={(M.top + H - M.bottom) / 2} textAnchor="middle" fontSize="13" fill="#1d2632" transform={`rotate(-90 14 ${(M.top + H - M.bottom) / 2})`}>
+          Force ({unit})
+        </text>
         <path d={path} fill="none" stroke="#1c4e91" strokeWidth="1.5" />
         <line x1={x(onset.timeS)} x2={x(onset.timeS)} y1={M.top} y2={H - M.bottom} stroke="#b42318" strokeDasharray="5 4" strokeWidth="1.5" />
         <circle cx={x(onset.timeS)} cy={y(onsetValue)} r="6" fill={onset.kind === "slipped" ? "#b42318" : "white"} stroke="#b42318" strokeWidth="2" />
@@ -53,7 +61,10 @@ export function TraceChart({ time, force, unit, onset }: TraceChartProps) {
         </text>
       </svg>
       <figcaption className="px-2 pb-1 text-sm text-ink-600">
-        {label}. {onset.kind === "held" ? "No drop big enough to count as a slip: the slip load is at least this." : "The first drop beyond the set amount below the running maximum."}
+        {label}.{" "}
+        {onset.kind === "held"
+          ? "No drop big enough to count as a slip: the slip load is at least this."
+          : "The first drop beyond the set amount below the running maximum."}
       </figcaption>
     </figure>
   );

@@ -18,7 +18,9 @@ export function InvitationsList({ invitations }: { invitations: InvitationRow[] 
   const notify = useToast();
   async function revoke(invitation: InvitationRow) {
     const result = await callApi("DELETE", `/api/crew/invitations/${invitation.id}`);
-    notify(result.ok ? { title: `Invitation to ${invitation.email} withdrawn`, tone: "ok" } : { title: "Not withdrawn", description: result.error, tone: "danger" });
+    notify(
+      result.ok ? { title: `Invitation to ${invitation.email} withdrawn`, tone: "ok" } : { title: "Not withdrawn", description: result.error, tone: "danger" },
+    );
     router.refresh();
   }
   return (
@@ -29,7 +31,11 @@ export function InvitationsList({ invitations }: { invitations: InvitationRow[] 
       columns={[
         { key: "email", header: "E-mail", cell: (i) => i.email },
         { key: "role", header: "Role", cell: (i) => i.role },
-        { key: "expires", header: "Valid until", cell: (i) => new Date(i.expiresAt).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" }) },
+        {
+          key: "expires",
+          header: "Valid until",
+          cell: (i) => new Date(i.expiresAt).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" }),
+        },
         {
           key: "actions",
           header: "Actions",

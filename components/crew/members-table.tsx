@@ -37,7 +37,12 @@ export function MembersTable({ members, selfId, canManage }: { members: MemberRo
           header: "Role",
           cell: (m) =>
             canManage ? (
-              <select aria-label={`Role of ${m.name}`} className={`${controlClasses} min-w-32`} value={m.role} onChange={(e) => act("PATCH", m, { role: e.target.value as Role })}>
+              <select
+                aria-label={`Role of ${m.name}`}
+                className={`${controlClasses} min-w-32`}
+                value={m.role}
+                onChange={(e) => act("PATCH", m, { role: e.target.value as Role })}
+              >
                 {ROLES.map((r) => (
                   <option key={r} value={r}>
                     {r}

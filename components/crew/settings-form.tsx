@@ -48,8 +48,8 @@ export function CrewSettingsForm({ settings, editable }: { settings: CrewSetting
         <div>
           <h2 className="text-lg">Minimum safety factors</h2>
           <p className="mb-3 text-sm text-ink-600">
-            MBS divided by the peak load a component sees must reach these. The defaults of 3 are common practice (no published source); follow the standards and
-            local rules where you rig.
+            MBS divided by the peak load a component sees must reach these. The defaults of 3 are common practice (no published source); follow the standards
+            and local rules where you rig.
           </p>
           <div className="grid gap-4 sm:grid-cols-2">
             {SAFETY_FACTOR_CLASSES.map((c) => (

@@ -16,7 +16,9 @@ export function FileList({ files }: { files: UploadRow[] }) {
             )}
             <span className="mt-1 block truncate">{f.fileName}</span>
           </a>
-          <span className="block text-xs text-ink-500">{(f.byteSize / 1024).toFixed(0)} KiB · SHA-256 {f.sha256.slice(0, 12)}…</span>
+          <span className="block text-xs text-ink-500">
+            {(f.byteSize / 1024).toFixed(0)} KiB · SHA-256 {f.sha256.slice(0, 12)}…
+          </span>
         </li>
       ))}
     </ul>

@@ -9,7 +9,16 @@ import { useApiForm } from "@/components/forms/use-api-form";
 import { Button } from "@/components/ui/button";
 import { Field, FieldFrame, controlClasses } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
-import { GEAR_KINDS, GEAR_KIND_LABELS, GearModelSchema, MEASURES, SPEC_SCHEMAS, type GearKind, type GearModelInput, type MeasureKey } from "@/lib/validations/kit";
+import {
+  GEAR_KINDS,
+  GEAR_KIND_LABELS,
+  GearModelSchema,
+  MEASURES,
+  SPEC_SCHEMAS,
+  type GearKind,
+  type GearModelInput,
+  type MeasureKey,
+} from "@/lib/validations/kit";
 
 // One form for every kind: the fields a kind shows are the keys of that kind's spec schema.
 interface FormValues {
@@ -108,16 +117,26 @@ export function GearModelForm({ model }: GearModelFormProps) {
           );
         })}
         {specKeys.includes("stretchPoints") ? (
-          <FieldFrame id="stretch-points" label="Stretch points (tension and elongation)" error={errorAt(errors, "specs.stretchPoints") ?? errorAt(errors, "specs.stretchPoints.root")}>
+          <FieldFrame
+            id="stretch-points"
+            label="Stretch points (tension and elongation)"
+            error={errorAt(errors, "specs.stretchPoints") ?? errorAt(errors, "specs.stretchPoints.root")}
+          >
             <p id="stretch-points" className="text-sm text-ink-500">
               From the maker&apos;s stretch chart or your own pull test: the first point is the origin, then tension and elongation both rising.
             </p>
             <table className="mt-2 text-sm">
               <thead>
                 <tr>
-                  <th scope="col" className="pr-3 text-left">Tension (kN)</th>
-                  <th scope="col" className="pr-3 text-left">Elongation (%)</th>
-                  <th scope="col"><span className="sr-only">Remove</span></th>
+                  <th scope="col" className="pr-3 text-left">
+                    Tension (kN)
+                  </th>
+                  <th scope="col" className="pr-3 text-left">
+                    Elongation (%)
+                  </th>
+                  <th scope="col">
+                    <span className="sr-only">Remove</span>
+                  </th>
                 </tr>
               </thead>
               <tbody>
@@ -134,7 +153,11 @@ export function GearModelForm({ model }: GearModelFormProps) {
                             className={controlClasses}
                             {...register(`specs.stretchPoints.${i}.${part}`, { setValueAs: asNumber })}
                           />
-                          {message ? <p role="alert" className="text-sm text-danger-700">{message}</p> : null}
+                          {message ? (
+                            <p role="alert" className="text-sm text-danger-700">
+                              {message}
+                            </p>
+                          ) : null}
                         </td>
                       );
                     })}

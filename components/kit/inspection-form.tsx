@@ -26,7 +26,12 @@ export function InspectionForm({ itemId }: { itemId: string }) {
   return (
     <form onSubmit={submit} noValidate className="grid gap-4 md:grid-cols-3">
       <Field label="Inspected on" type="date" error={formState.errors.inspectedOn?.message} {...register("inspectedOn")} />
-      <Select label="Result" options={INSPECTION_RESULTS.map((r) => ({ value: r, label: INSPECTION_RESULT_LABELS[r] }))} error={formState.errors.result?.message} {...register("result")} />
+      <Select
+        label="Result"
+        options={INSPECTION_RESULTS.map((r) => ({ value: r, label: INSPECTION_RESULT_LABELS[r] }))}
+        error={formState.errors.result?.message}
+        {...register("result")}
+      />
       <Field label="Notes" hint="What you saw: wear, cuts, glazing, deformation." error={formState.errors.notes?.message} {...register("notes")} />
       <div className="md:col-span-3">
         <FormError message={formError} />

@@ -14,7 +14,9 @@ const today = () => new Date().toISOString().slice(0, 10);
 export function ItemForm({ modelId, item }: { modelId: string; item?: { id: string; label: string; inServiceSince: string; notes: string } }) {
   const router = useRouter();
   const notify = useToast();
-  const defaultValues = item ? { label: item.label, inServiceSince: item.inServiceSince, notes: item.notes } : { label: "", inServiceSince: today(), notes: "" };
+  const defaultValues = item
+    ? { label: item.label, inServiceSince: item.inServiceSince, notes: item.notes }
+    : { label: "", inServiceSince: today(), notes: "" };
   // The fields shown are the item's own; a new item is sent with its model, which the server checks.
   const { form, submit, formError } = useApiForm(GearItemEditSchema, {
     defaultValues,

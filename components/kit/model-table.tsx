@@ -17,14 +17,36 @@ export function ModelTable({ models }: { models: GearModelRow[] }) {
       searchText={(m) => `${m.name} ${GEAR_KIND_LABELS[m.kind]} ${m.notes} ${specSummary(m.specs)}`}
       filters={[
         { label: "Kind", options: GEAR_KINDS.map((k) => ({ value: k, label: GEAR_KIND_LABELS[k] })), valueOf: (m) => m.kind },
-        { label: "Status", options: [{ value: "in", label: "In service" }, { value: "retired", label: "Retired" }], valueOf: (m) => (m.retiredOn ? "retired" : "in") },
+        {
+          label: "Status",
+          options: [
+            { value: "in", label: "In service" },
+            { value: "retired", label: "Retired" },
+          ],
+          valueOf: (m) => (m.retiredOn ? "retired" : "in"),
+        },
       ]}
       empty={<EmptyState title="No gear models match">Change the search or the filters, or add a model.</EmptyState>}
       columns={[
-        { key: "name", header: "Model", sortBy: (m) => m.name, cell: (m) => <Link href={`/kit/models/${m.id}`} className="font-semibold">{m.name}</Link> },
+        {
+          key: "name",
+          header: "Model",
+          sortBy: (m) => m.name,
+          cell: (m) => (
+            <Link href={`/kit/models/${m.id}`} className="font-semibold">
+              {m.name}
+            </Link>
+          ),
+        },
         { key: "kind", header: "Kind", sortBy: (m) => GEAR_KIND_LABELS[m.kind], cell: (m) => GEAR_KIND_LABELS[m.kind] },
         { key: "specs", header: "Specs", cell: (m) => specSummary(m.specs) },
-        { key: "mbs", header: "MBS (kN)", align: "right", sortBy: (m) => ("mbsKN" in m.specs ? (m.specs.mbsKN ?? null) : null), cell: (m) => ("mbsKN" in m.specs ? (m.specs.mbsKN ?? "—") : "—") },
+        {
+          key: "mbs",
+          header: "MBS (kN)",
+          align: "right",
+          sortBy: (m) => ("mbsKN" in m.specs ? (m.specs.mbsKN ?? null) : null),
+          cell: (m) => ("mbsKN" in m.specs ? (m.specs.mbsKN ?? "—") : "—"),
+        },
         { key: "items", header: "Items in service", align: "right", sortBy: (m) => m.inServiceCount, cell: (m) => `${m.inServiceCount} of ${m.itemCount}` },
         { key: "status", header: "Status", sortBy: (m) => m.retiredOn ?? "", cell: (m) => <StatusBadge retiredOn={m.retiredOn} /> },
       ]}

@@ -27,7 +27,12 @@ export function RetireForm({ url, what }: { url: string; what: string }) {
     <form onSubmit={submit} noValidate className="space-y-4">
       <p className="text-ink-600">A retired {what.toLowerCase()} cannot be put in a new plan. Its record and history are kept.</p>
       <Field label="Retired on" type="date" error={formState.errors.retiredOn?.message} {...register("retiredOn")} />
-      <Field label="Why" hint="For example: core shot, failed inspection, lost, past its service life." error={formState.errors.reason?.message} {...register("reason")} />
+      <Field
+        label="Why"
+        hint="For example: core shot, failed inspection, lost, past its service life."
+        error={formState.errors.reason?.message}
+        {...register("reason")}
+      />
       <FormError message={formError} />
       <Button type="submit" tone="danger" disabled={formState.isSubmitting}>
         Retire {what.toLowerCase()}

@@ -10,13 +10,19 @@ export function SpecTable({ specs }: { specs: GearSpecs }) {
         if (key === "stretchPoints") {
           const points = value as { tensionKN: number; elongationPct: number }[];
           return [
-            <dt key={`${key}-t`} className="font-semibold">Stretch points</dt>,
+            <dt key={`${key}-t`} className="font-semibold">
+              Stretch points
+            </dt>,
             <dd key={`${key}-d`}>
               <table className="text-sm">
                 <thead>
                   <tr>
-                    <th scope="col" className="pr-4 text-left">Tension (kN)</th>
-                    <th scope="col" className="text-left">Elongation (%)</th>
+                    <th scope="col" className="pr-4 text-left">
+                      Tension (kN)
+                    </th>
+                    <th scope="col" className="text-left">
+                      Elongation (%)
+                    </th>
                   </tr>
                 </thead>
                 <tbody>
@@ -33,7 +39,9 @@ export function SpecTable({ specs }: { specs: GearSpecs }) {
         }
         const measure = MEASURES[key as MeasureKey];
         return [
-          <dt key={`${key}-t`} className="font-semibold">{measure?.label ?? "Construction"}</dt>,
+          <dt key={`${key}-t`} className="font-semibold">
+            {measure?.label ?? "Construction"}
+          </dt>,
           <dd key={`${key}-d`} className="tabular-nums">
             {measure ? withUnit(key as MeasureKey, String(value)) : String(value)}
           </dd>,

@@ -54,7 +54,20 @@ export function LineDiagram({ result, units }: { result: RigResult; units: UnitS
         {width > 0 ? (
           <Stage width={width} height={HEIGHT}>
             <Layer>
-              <Text x={8} y={8} width={width - 16} wrap="word" text={exaggeration === 1 ? "True scale: heights not exaggerated" : `Vertical exaggeration ×${exaggeration}: heights drawn ${exaggeration} times their scale`} fontSize={14} fontStyle="bold" fill={INK} />
+              <Text
+                x={8}
+                y={8}
+                width={width - 16}
+                wrap="word"
+                text={
+                  exaggeration === 1
+                    ? "True scale: heights not exaggerated"
+                    : `Vertical exaggeration ×${exaggeration}: heights drawn ${exaggeration} times their scale`
+                }
+                fontSize={14}
+                fontStyle="bold"
+                fill={INK}
+              />
               <Line points={[px(0), py(0), px(end.x), py(end.y)]} stroke={MUTED} strokeWidth={1} dash={[2, 6]} />
               <Line points={points(unloaded.profile)} stroke={MUTED} strokeWidth={2} dash={[10, 6]} />
               <Line points={points(walker.profile)} stroke={LOADED} strokeWidth={3} />

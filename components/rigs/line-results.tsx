@@ -56,7 +56,18 @@ function SafetyFactorTable({ factors, units }: { factors: SafetyFactor[]; units:
       rowKey={(f) => `${f.location}-${f.name}-${f.category}`}
       rows={factors}
       columns={[
-        { key: "name", header: "Component", cell: (f) => <>{f.name}<span className="block text-xs text-ink-600">{where(f)}, {f.category}</span></> },
+        {
+          key: "name",
+          header: "Component",
+          cell: (f) => (
+            <>
+              {f.name}
+              <span className="block text-xs text-ink-600">
+                {where(f)}, {f.category}
+              </span>
+            </>
+          ),
+        },
         // The engine's `shown` is already cut down, never rounded up. Verdict first: it must not scroll out of sight.
         { key: "factor", header: "Factor", align: "right", cell: (f) => f.shown },
         { key: "verdict", header: "Result", cell: (f) => <Verdict tone={f.passes ? "ok" : "danger"}>{f.passes ? "Passes" : "Fails"}</Verdict> },
@@ -126,7 +137,10 @@ function RigFigures({ result, units }: { result: RigResult; units: UnitSystem })
           rows={[
             ["Force at the brake at peak tension", formatLoad(brake.brakeForce, units)],
             ["Margin (lowest slip ÷ force at the brake)", brake.margin === null ? "no slip results" : `${atLeast}${truncateRatio(brake.margin)}`],
-            ["Highest line tension the brake holds", brake.highestLineTensionHeld === null ? "unknown: untested" : `${atLeast}${formatCapacity(brake.highestLineTensionHeld, units)}`],
+            [
+              "Highest line tension the brake holds",
+              brake.highestLineTensionHeld === null ? "unknown: untested" : `${atLeast}${formatCapacity(brake.highestLineTensionHeld, units)}`,
+            ],
             ["Peak line tension at the tensioning anchor", formatLoad(brake.peakLineTensionN, units)],
           ]}
         />
@@ -194,8 +208,8 @@ export function LineResults({ evaluation, units, stale }: { evaluation: Evaluati
     <div className={stale ? "space-y-6 opacity-60" : "space-y-6"} aria-busy={stale}>
       <p role="status" className="rounded-control bg-info-100 p-3 text-info-700">
         Figures for the inputs as they are now, computed in your browser by engine {evaluation.result.engineVersion}
-        {evaluation.result.extrapolated ? "; some tensions are beyond the last measured stretch point" : ""}. Loads and sags are rounded up; safety factors, margins and
-        capacities are cut down, never rounded up.
+        {evaluation.result.extrapolated ? "; some tensions are beyond the last measured stretch point" : ""}. Loads and sags are rounded up; safety factors,
+        margins and capacities are cut down, never rounded up.
       </p>
       <ResultsBody result={evaluation.result} units={units} />
     </div>

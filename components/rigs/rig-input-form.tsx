@@ -79,9 +79,15 @@ function BackupFields() {
           checked={backup !== undefined}
           onChange={(event) => {
             const { mainline } = getValues();
-            setValue("backup", event.target.checked ? { name: `${mainline.name} backup`, massPerMetreKg: mainline.massPerMetreKg, mbsN: mainline.mbsN, ridesAlong: true } : undefined, {
-              shouldValidate: true,
-            });
+            setValue(
+              "backup",
+              event.target.checked
+                ? { name: `${mainline.name} backup`, massPerMetreKg: mainline.massPerMetreKg, mbsN: mainline.mbsN, ridesAlong: true }
+                : undefined,
+              {
+                shouldValidate: true,
+              },
+            );
           }}
         />
         There is a backup webbing
@@ -149,7 +155,13 @@ function PretensionAndWalker() {
           <QuantityField name="leashFall.leashLengthM" label="Leash length" kind="length" optional />
           <QuantityField name="leashFall.harnessHeightM" label="Harness height above the line" kind="length" optional />
           <QuantityField name="leashFall.fallHeightM" label="Free-fall height" kind="length" optional hint="Blank: leash length + harness height." />
-          <QuantityField name="leashFall.positionFraction" label="Fall position from A, share of the span" kind="fraction" optional hint="Blank: at the walker." />
+          <QuantityField
+            name="leashFall.positionFraction"
+            label="Fall position from A, share of the span"
+            kind="fraction"
+            optional
+            hint="Blank: at the walker."
+          />
         </Pair>
       </Section>
     </>
@@ -214,10 +226,18 @@ function CrewBenchResults() {
       <caption className="text-left font-semibold text-ink-900">From the crew&apos;s slip bench</caption>
       <thead>
         <tr className="border-b border-ink-200">
-          <th scope="col" className="py-1 pr-2">Device</th>
-          <th scope="col" className="py-1 pr-2">Rope (mm)</th>
-          <th scope="col" className="py-1 pr-2">Outcome</th>
-          <th scope="col" className="py-1">Force</th>
+          <th scope="col" className="py-1 pr-2">
+            Device
+          </th>
+          <th scope="col" className="py-1 pr-2">
+            Rope (mm)
+          </th>
+          <th scope="col" className="py-1 pr-2">
+            Outcome
+          </th>
+          <th scope="col" className="py-1">
+            Force
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -243,7 +263,12 @@ function BrakeFields() {
   return (
     <Section title="Brake" problem="slipBench">
       <Pair>
-        <TextField name="brake.device" label="Brake device" suggestions={devices} hint={devices.length ? "Offers the devices on the crew's slip bench." : undefined} />
+        <TextField
+          name="brake.device"
+          label="Brake device"
+          suggestions={devices}
+          hint={devices.length ? "Offers the devices on the crew's slip bench." : undefined}
+        />
         <QuantityField
           name="brake.ropeDiameterMm"
           label="Rope diameter (mm)"
@@ -252,7 +277,9 @@ function BrakeFields() {
           hint={diameters.length ? "Offers the diameters on the crew's slip bench; another diameter is untested." : undefined}
         />
       </Pair>
-      <p className="text-sm text-ink-600">Only results for the same device and rope diameter count. &quot;Held to&quot; is a lower bound: the test stopped without a slip.</p>
+      <p className="text-sm text-ink-600">
+        Only results for the same device and rope diameter count. &quot;Held to&quot; is a lower bound: the test stopped without a slip.
+      </p>
       {crewBench.length ? <CrewBenchResults /> : null}
       <h3 className="font-semibold">{crewBench.length ? "Further slip results, typed here (not on the crew's bench)" : "Slip results from the bench"}</h3>
       {results.fields.map((result, i) => (
@@ -306,7 +333,9 @@ function AnchorFields({ side }: { side: "a" | "b" }) {
           onBlur={onBlur}
           onChange={(event) => onChange(event.target.value === "bridle" ? { kind: "bridle", includedAngleDeg: STARTING_BRIDLE_ANGLE } : { kind: "single" })}
         />
-        {layout.kind === "bridle" ? <QuantityField name={`anchors.${side}.layout.includedAngleDeg`} label={`${title} bridle included angle (°)`} kind="plain" /> : null}
+        {layout.kind === "bridle" ? (
+          <QuantityField name={`anchors.${side}.layout.includedAngleDeg`} label={`${title} bridle included angle (°)`} kind="plain" />
+        ) : null}
       </Pair>
       <h3 className="font-semibold">Components in the load path</h3>
       {components.fields.map((component, i) => (

@@ -6,7 +6,10 @@ import { callApi } from "@/components/forms/call-api";
 import { judgeAgreement, SAME_FIGURE, type Difference } from "@/lib/rig-form/compare-results";
 import type { Evaluation } from "./line-check";
 
-type Outcome = { kind: "agrees"; version: string; exact: boolean; largestRelative: number } | { kind: "differs"; differences: Difference[] } | { kind: "refused"; message: string };
+type Outcome =
+  | { kind: "agrees"; version: string; exact: boolean; largestRelative: number }
+  | { kind: "differs"; differences: Difference[] }
+  | { kind: "refused"; message: string };
 
 interface Checked {
   /** The input the server was asked about: an outcome for another input is not shown. */
@@ -63,8 +66,8 @@ export function ServerCheck({ evaluation }: { evaluation: Evaluation }) {
         {outcome?.kind === "differs" ? (
           <div className="rounded-control border-2 border-danger-600 bg-danger-100 p-3 text-danger-700">
             <p className="font-semibold">
-              <span aria-hidden="true">✗ </span>The server&apos;s figures differ from the browser&apos;s at {outcome.differences.length} place(s), by more than {SAME_FIGURE} of their value. Rig by
-              the server&apos;s, and report this.
+              <span aria-hidden="true">✗ </span>The server&apos;s figures differ from the browser&apos;s at {outcome.differences.length} place(s), by more than{" "}
+              {SAME_FIGURE} of their value. Rig by the server&apos;s, and report this.
             </p>
             <ul className="mt-2 list-disc pl-5 font-mono text-sm">
               {outcome.differences.slice(0, MOST_DIFFERENCES_SHOWN).map((d) => (

@@ -16,7 +16,21 @@ interface Series {
 }
 
 /** One panel of the chart: lines over the walker's position, the worst point of each marked and named. */
-function SweepPanel({ title, kind, series, sweep, units, offset }: { title: string; kind: "force" | "length"; series: Series[]; sweep: Sweep; units: UnitSystem; offset: number }) {
+function SweepPanel({
+  title,
+  kind,
+  series,
+  sweep,
+  units,
+  offset,
+}: {
+  title: string;
+  kind: "force" | "length";
+  series: Series[];
+  sweep: Sweep;
+  units: UnitSystem;
+  offset: number;
+}) {
   const unit = unitLabel(kind, units);
   const span = sweep.points[sweep.points.length - 1].x;
   const values = series.flatMap((s) => sweep.points.map(s.value));
@@ -44,7 +58,13 @@ function SweepPanel({ title, kind, series, sweep, units, offset }: { title: stri
       ))}
       {series.map((s) => (
         <g key={s.label}>
-          <polyline fill="none" strokeWidth={3.5} strokeDasharray={s.dash} className="stroke-spruce-700" points={sweep.points.map((p) => `${x(p.x)},${y(s.value(p))}`).join(" ")} />
+          <polyline
+            fill="none"
+            strokeWidth={3.5}
+            strokeDasharray={s.dash}
+            className="stroke-spruce-700"
+            points={sweep.points.map((p) => `${x(p.x)},${y(s.value(p))}`).join(" ")}
+          />
           <circle cx={x(s.worst.x)} cy={y(s.value(s.worst))} r={8} className="fill-danger-600 stroke-white" strokeWidth={2} />
         </g>
       ))}
@@ -56,10 +76,28 @@ function SweepPanel({ title, kind, series, sweep, units, offset }: { title: stri
 export function SweepChart({ sweep, units }: { sweep: Sweep; units: UnitSystem }) {
   const at = (p: SweepPoint) => formatDistance(p.x, units);
   const tension: Series[] = [
-    { label: "A", value: (p) => p.tensionA, worst: sweep.worstTensionA, worstText: `Highest at A: ${formatLoad(sweep.worstTensionA.tensionA, units)}, walker at ${at(sweep.worstTensionA)} (solid)` },
-    { label: "B", value: (p) => p.tensionB, dash: "8 5", worst: sweep.worstTensionB, worstText: `Highest at B: ${formatLoad(sweep.worstTensionB.tensionB, units)}, walker at ${at(sweep.worstTensionB)} (dashed)` },
+    {
+      label: "A",
+      value: (p) => p.tensionA,
+      worst: sweep.worstTensionA,
+      worstText: `Highest at A: ${formatLoad(sweep.worstTensionA.tensionA, units)}, walker at ${at(sweep.worstTensionA)} (solid)`,
+    },
+    {
+      label: "B",
+      value: (p) => p.tensionB,
+      dash: "8 5",
+      worst: sweep.worstTensionB,
+      worstText: `Highest at B: ${formatLoad(sweep.worstTensionB.tensionB, units)}, walker at ${at(sweep.worstTensionB)} (dashed)`,
+    },
   ];
-  const sag: Series[] = [{ label: "sag", value: (p) => p.sag, worst: sweep.deepestSag, worstText: `Deepest: ${formatDepth(sweep.deepestSag.sag, units)}, walker at ${at(sweep.deepestSag)}` }];
+  const sag: Series[] = [
+    {
+      label: "sag",
+      value: (p) => p.sag,
+      worst: sweep.deepestSag,
+      worstText: `Deepest: ${formatDepth(sweep.deepestSag.sag, units)}, walker at ${at(sweep.deepestSag)}`,
+    },
+  ];
   return (
     <figure>
       <svg viewBox={`0 0 ${WIDTH} ${PANEL * 2}`} className="h-auto w-full" role="img" aria-labelledby="sweep-chart-title">

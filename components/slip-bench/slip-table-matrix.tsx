@@ -16,7 +16,9 @@ export function SlipTableMatrix({ table, cellHref }: { table: SlipTable; cellHre
         <caption className="sr-only">Slip table: lowest slip load by device and rope diameter</caption>
         <thead className="bg-ink-100 text-ink-700">
           <tr>
-            <th scope="col" className="px-4 py-2 text-left">Device</th>
+            <th scope="col" className="px-4 py-2 text-left">
+              Device
+            </th>
             {table.diameters.map((d) => (
               <th key={d} scope="col" className="px-4 py-2 text-right">
                 {d.toFixed(1)} mm
@@ -62,7 +64,11 @@ export function SlipTableMatrix({ table, cellHref }: { table: SlipTable; cellHre
                 return (
                   <td key={d} className="px-4 py-3 text-right tabular-nums" data-cell={name}>
                     {cellHref ? (
-                      <Link href={cellHref(device.id, d)} aria-label={`${device.name} on ${d.toFixed(1)} mm: ${cell.lowestSlipN !== null ? `lowest slip ${formatForce(cell.lowestSlipN, "kN")}` : `held to at least ${formatForce(cell.highestHeldN!, "kN")}`}, ${detail}`} className="block no-underline">
+                      <Link
+                        href={cellHref(device.id, d)}
+                        aria-label={`${device.name} on ${d.toFixed(1)} mm: ${cell.lowestSlipN !== null ? `lowest slip ${formatForce(cell.lowestSlipN, "kN")}` : `held to at least ${formatForce(cell.highestHeldN!, "kN")}`}, ${detail}`}
+                        className="block no-underline"
+                      >
                         {content}
                       </Link>
                     ) : (

@@ -89,7 +89,13 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
           <div className="md:col-span-3">
             <Field label="Trace file (CSV)" name="file" type="file" accept=".csv,.txt,text/csv,text/plain" className="py-2" />
           </div>
-          <Select label="Force unit of the trace" name="unit" options={unitOptions} value={traceUnit} onChange={(e) => setTraceUnit(e.target.value as ForceUnit)} />
+          <Select
+            label="Force unit of the trace"
+            name="unit"
+            options={unitOptions}
+            value={traceUnit}
+            onChange={(e) => setTraceUnit(e.target.value as ForceUnit)}
+          />
           <Field
             key={traceUnit}
             label={`Drop that counts as a slip (${traceUnit})`}
@@ -117,7 +123,8 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
           <div className="space-y-2">
             <TraceChart time={analysis.chart.time} force={analysis.chart.force} unit={analysis.unit} onset={analysis.onset} />
             <p>
-              Read {analysis.rows.toLocaleString("en")} rows over {analysis.durationS.toFixed(1)} s (time from “{analysis.timeColumn}”, force from “{analysis.forceColumn}”).{" "}
+              Read {analysis.rows.toLocaleString("en")} rows over {analysis.durationS.toFixed(1)} s (time from “{analysis.timeColumn}”, force from “
+              {analysis.forceColumn}”).{" "}
               <strong>
                 Detected: {analysis.onset.kind === "slipped" ? "slipped at" : "held to"} {formatForce(analysis.onset.forceN, analysis.unit)}
               </strong>
@@ -130,7 +137,12 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
       <form onSubmit={submit} noValidate className="space-y-5" aria-labelledby="test-heading">
         <h2 id="test-heading">The test</h2>
         <div className="grid gap-4 md:grid-cols-2">
-          <Select label="Device tested" options={devices.map((d) => ({ value: d.id, label: d.name }))} error={errors.deviceModelId?.message} {...register("deviceModelId")} />
+          <Select
+            label="Device tested"
+            options={devices.map((d) => ({ value: d.id, label: d.name }))}
+            error={errors.deviceModelId?.message}
+            {...register("deviceModelId")}
+          />
           <Select
             label="Rope (from the Kit)"
             options={[{ value: "", label: "Not in the Kit" }, ...ropes.map((r) => ({ value: r.id, label: `${r.name} (${r.diameterMm} mm)` }))]}
@@ -143,16 +155,33 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
               },
             })}
           />
-          <Field label="Rope diameter (mm)" inputMode="decimal" hint="As measured, to 0.1 mm (3–25 mm)." error={errors.ropeDiameterMm?.message} {...register("ropeDiameterMm", { setValueAs: asNumber })} />
+          <Field
+            label="Rope diameter (mm)"
+            inputMode="decimal"
+            hint="As measured, to 0.1 mm (3–25 mm)."
+            error={errors.ropeDiameterMm?.message}
+            {...register("ropeDiameterMm", { setValueAs: asNumber })}
+          />
           <Field label="Tested on" type="date" error={errors.testedOn?.message} {...register("testedOn")} />
-          <Select label="Result" options={SLIP_RESULTS.map((r) => ({ value: r, label: SLIP_RESULT_LABELS[r] }))} error={errors.result?.message} {...register("result")} />
+          <Select
+            label="Result"
+            options={SLIP_RESULTS.map((r) => ({ value: r, label: SLIP_RESULT_LABELS[r] }))}
+            error={errors.result?.message}
+            {...register("result")}
+          />
           <div className="grid grid-cols-[1fr_7rem] gap-2">
             <Field label="Force" inputMode="decimal" error={errors.force?.message} {...register("force", { setValueAs: asNumber })} />
             <Select label="Unit" options={unitOptions} error={errors.forceUnit?.message} {...register("forceUnit")} />
           </div>
         </div>
         <FieldFrame id="slip-notes" label="Notes" error={errors.notes?.message}>
-          <textarea id="slip-notes" rows={3} className={`${controlClasses} py-2`} placeholder="Rope condition, pull rate, anything unusual" {...register("notes")} />
+          <textarea
+            id="slip-notes"
+            rows={3}
+            className={`${controlClasses} py-2`}
+            placeholder="Rope condition, pull rate, anything unusual"
+            {...register("notes")}
+          />
         </FieldFrame>
         <input type="hidden" {...register("traceUploadId", { setValueAs: (v) => (v === "" ? undefined : v) })} />
         <FormError message={formError} />

@@ -19,14 +19,32 @@ export function SlipTestList({ tests }: { tests: SlipTestRow[] }) {
       searchText={(t) => `${t.deviceName} ${t.ropeModelName ?? ""} ${t.testerName} ${t.notes}`}
       filters={[
         { label: "Device", options: devices, valueOf: (t) => t.deviceId },
-        { label: "Result", options: [{ value: "slipped", label: "Slipped" }, { value: "held", label: "Held" }], valueOf: (t) => t.result },
+        {
+          label: "Result",
+          options: [
+            { value: "slipped", label: "Slipped" },
+            { value: "held", label: "Held" },
+          ],
+          valueOf: (t) => t.result,
+        },
       ]}
       empty={<EmptyState title="No slip tests match" />}
       columns={[
         { key: "date", header: "Tested on", sortBy: (t) => t.testedOn, cell: (t) => <Link href={`/slip-bench/tests/${t.id}`}>{t.testedOn}</Link> },
         { key: "device", header: "Device", sortBy: (t) => t.deviceName, cell: (t) => t.deviceName },
-        { key: "rope", header: "Rope", sortBy: (t) => t.ropeDiameterMm, cell: (t) => `${t.ropeDiameterMm.toFixed(1)} mm${t.ropeModelName ? ` (${t.ropeModelName})` : ""}` },
-        { key: "result", header: "Result", sortBy: (t) => t.forceN, align: "right", cell: (t) => `${t.result === "slipped" ? "slipped at" : "held to"} ${formatForce(t.forceN, t.forceUnit)}` },
+        {
+          key: "rope",
+          header: "Rope",
+          sortBy: (t) => t.ropeDiameterMm,
+          cell: (t) => `${t.ropeDiameterMm.toFixed(1)} mm${t.ropeModelName ? ` (${t.ropeModelName})` : ""}`,
+        },
+        {
+          key: "result",
+          header: "Result",
+          sortBy: (t) => t.forceN,
+          align: "right",
+          cell: (t) => `${t.result === "slipped" ? "slipped at" : "held to"} ${formatForce(t.forceN, t.forceUnit)}`,
+        },
         { key: "trace", header: "Trace", cell: (t) => (t.traceUploadId ? (isCorrection(detectedOf(t), t.result, t.forceN) ? "corrected" : "confirmed") : "—") },
         { key: "who", header: "Who", sortBy: (t) => t.testerName, cell: (t) => t.testerName },
       ]}

@@ -23,7 +23,10 @@ export function Dialog({ trigger, title, description, open, onOpenChange, childr
           <RadixDialog.Title className="text-xl font-semibold">{title}</RadixDialog.Title>
           {description ? <RadixDialog.Description className="mt-1 text-ink-600">{description}</RadixDialog.Description> : null}
           <div className="mt-4">{children}</div>
-          <RadixDialog.Close className="absolute right-3 top-3 min-h-target min-w-target rounded-control text-xl text-ink-600 hover:bg-ink-100" aria-label="Close">
+          <RadixDialog.Close
+            className="absolute right-3 top-3 min-h-target min-w-target rounded-control text-xl text-ink-600 hover:bg-ink-100"
+            aria-label="Close"
+          >
             ×
           </RadixDialog.Close>
         </RadixDialog.Content>

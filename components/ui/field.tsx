@@ -52,13 +52,7 @@ export const Field = forwardRef<HTMLInputElement, FieldProps>(function Field({ l
   const fieldId = id ?? generated;
   return (
     <FieldFrame id={fieldId} label={label} hint={hint} error={error}>
-      <input
-        ref={ref}
-        id={fieldId}
-        {...describedBy(fieldId, error, hint)}
-        className={classNames(controlClasses, className)}
-        {...props}
-      />
+      <input ref={ref} id={fieldId} {...describedBy(fieldId, error, hint)} className={classNames(controlClasses, className)} {...props} />
     </FieldFrame>
   );
 });

@@ -20,13 +20,7 @@ export const Select = forwardRef<HTMLSelectElement, SelectProps>(function Select
   const fieldId = id ?? generated;
   return (
     <FieldFrame id={fieldId} label={label} hint={hint} error={error}>
-      <select
-        ref={ref}
-        id={fieldId}
-        {...describedBy(fieldId, error, hint)}
-        className={classNames(controlClasses, "pr-8", className)}
-        {...props}
-      >
+      <select ref={ref} id={fieldId} {...describedBy(fieldId, error, hint)} className={classNames(controlClasses, "pr-8", className)} {...props}>
         {options.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}

@@ -24,7 +24,12 @@ interface TableProps<Row> {
  */
 export function Table<Row>({ caption, columns, rows, rowKey }: TableProps<Row>) {
   return (
-    <div tabIndex={0} role="region" aria-label={`${caption}, scrolls sideways`} className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel">
+    <div
+      tabIndex={0}
+      role="region"
+      aria-label={`${caption}, scrolls sideways`}
+      className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel"
+    >
       <table className="min-w-full text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-ink-100 text-ink-700">

@@ -14,11 +14,7 @@ export const newPassword = z
   .min(PASSWORD_MIN, { error: `Use at least ${PASSWORD_MIN} characters.` })
   .max(200, { error: "Use at most 200 characters." });
 
-const personName = z
-  .string({ error: "Enter your name." })
-  .trim()
-  .min(1, { error: "Enter your name." })
-  .max(100, { error: "Use at most 100 characters." });
+const personName = z.string({ error: "Enter your name." }).trim().min(1, { error: "Enter your name." }).max(100, { error: "Use at most 100 characters." });
 
 export const signInSchema = z.object({
   email,
@@ -40,4 +36,3 @@ export const changePasswordSchema = z.object({
   currentPassword: z.string({ error: "Enter your current password." }).min(1, { error: "Enter your current password." }),
   newPassword,
 });
-

@@ -26,7 +26,9 @@ export const SAFETY_FACTOR_CLASSES = ["webbing", "rope", "anchor", "connector", 
 
 export const crewSettingsSchema = z.object({
   units: z.enum(["si", "us"], { error: "Choose SI or US units." }),
-  minSafetyFactors: z.object(Object.fromEntries(SAFETY_FACTOR_CLASSES.map((c) => [c, factor])) as Record<(typeof SAFETY_FACTOR_CLASSES)[number], typeof factor>),
+  minSafetyFactors: z.object(
+    Object.fromEntries(SAFETY_FACTOR_CLASSES.map((c) => [c, factor])) as Record<(typeof SAFETY_FACTOR_CLASSES)[number], typeof factor>,
+  ),
   allowSelfSignOff: z.boolean({ error: "Choose yes or no." }),
 });
 

@@ -67,7 +67,11 @@ const stretchPoints = z
         ctx.addIssue({ code: "custom", path: [i, "tensionKN"], message: `Tension must rise from point to point (more than ${points[i - 1].tensionKN} kN).` });
       }
       if (!(points[i].elongationPct > points[i - 1].elongationPct)) {
-        ctx.addIssue({ code: "custom", path: [i, "elongationPct"], message: `Elongation must rise from point to point (more than ${points[i - 1].elongationPct} %).` });
+        ctx.addIssue({
+          code: "custom",
+          path: [i, "elongationPct"],
+          message: `Elongation must rise from point to point (more than ${points[i - 1].elongationPct} %).`,
+        });
       }
     }
   });
@@ -102,16 +106,7 @@ const modelOf = <K extends GearKind>(kind: K) => z.object({ kind: z.literal(kind
 
 export const GearModelSchema = z.discriminatedUnion(
   "kind",
-  [
-    modelOf("webbing"),
-    modelOf("rope"),
-    modelOf("brake"),
-    modelOf("line_grip"),
-    modelOf("pulley"),
-    modelOf("connector"),
-    modelOf("sling"),
-    modelOf("other"),
-  ],
+  [modelOf("webbing"), modelOf("rope"), modelOf("brake"), modelOf("line_grip"), modelOf("pulley"), modelOf("connector"), modelOf("sling"), modelOf("other")],
   { error: `Choose a kind of gear: ${GEAR_KINDS.join(", ")}.` },
 );
 export type GearModelInput = z.input<typeof GearModelSchema>;
@@ -120,9 +115,7 @@ export type GearSpecs<K extends GearKind = GearKind> = z.output<(typeof SPEC_SCH
 
 /** A calendar date as the browser's date input gives it, not in the future. */
 export const pastDate = (label: string) =>
-  z.iso
-    .date({ error: `${label} must be a date (YYYY-MM-DD).` })
-    .refine((d) => d <= new Date().toISOString().slice(0, 10), `${label} cannot be in the future.`);
+  z.iso.date({ error: `${label} must be a date (YYYY-MM-DD).` }).refine((d) => d <= new Date().toISOString().slice(0, 10), `${label} cannot be in the future.`);
 
 export const GearItemSchema = z.object({
   modelId: z.uuid({ error: "Choose the gear model this item is." }),
@@ -139,7 +132,11 @@ export type GearItemEdit = z.output<typeof GearItemEditSchema>;
 
 export const RetirementSchema = z.object({
   retiredOn: pastDate("Retired on"),
-  reason: z.string().trim().min(3, "Say why it was retired (for example: core shot, failed inspection, lost).").max(500, "A reason has at most 500 characters."),
+  reason: z
+    .string()
+    .trim()
+    .min(3, "Say why it was retired (for example: core shot, failed inspection, lost).")
+    .max(500, "A reason has at most 500 characters."),
 });
 export type RetirementInput = z.input<typeof RetirementSchema>;
 export type Retirement = z.output<typeof RetirementSchema>;

@@ -65,7 +65,11 @@ export const TraceOptionsSchema = z
   .superRefine((options, ctx) => {
     const dropN = toNewtons(options.drop, options.unit);
     if (dropN < 5 || dropN > 5000) {
-      ctx.addIssue({ code: "custom", path: ["drop"], message: `A drop of ${options.drop} ${options.unit} is outside 5 N–5 kN: it would catch noise or miss a slip; check the unit.` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["drop"],
+        message: `A drop of ${options.drop} ${options.unit} is outside 5 N–5 kN: it would catch noise or miss a slip; check the unit.`,
+      });
     }
   });
 export type TraceOptions = z.output<typeof TraceOptionsSchema>;

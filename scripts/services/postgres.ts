@@ -38,7 +38,8 @@ export async function ensurePostgresBinaries(): Promise<string> {
     await aptInstall(["postgresql"], "the database");
     bin = findBinDir();
   }
-  if (!bin) throw new StackError("PostgreSQL was installed but no initdb was found under /usr/lib/postgresql: set PG_BIN to the folder holding initdb and pg_ctl.");
+  if (!bin)
+    throw new StackError("PostgreSQL was installed but no initdb was found under /usr/lib/postgresql: set PG_BIN to the folder holding initdb and pg_ctl.");
   return bin;
 }
 
@@ -81,7 +82,17 @@ function initCluster(bin: string, dataDir: string): void {
   const pwFile = path.join(dataDir, "..", "pg-password");
   fs.writeFileSync(pwFile, SUPERUSER_PASSWORD, { mode: 0o644 });
   const init = asServerUser(path.join(bin, "initdb"), [
-    "-D", dataDir, "-U", SUPERUSER, "--pwfile", pwFile, "--auth-host=scram-sha-256", "--auth-local=trust", "-E", "UTF8", "--locale=C",
+    "-D",
+    dataDir,
+    "-U",
+    SUPERUSER,
+    "--pwfile",
+    pwFile,
+    "--auth-host=scram-sha-256",
+    "--auth-local=trust",
+    "-E",
+    "UTF8",
+    "--locale=C",
   ]);
   fs.rmSync(pwFile, { force: true });
   if (init.status !== 0) {
@@ -109,15 +120,25 @@ export async function startCluster(projectDir: string, profile: Profile, port: n
   if (isRunning(bin, dataDir)) {
     const current = runningPort(dataDir);
     if (current !== port) {
-      throw new StackError(`This project's ${profile} database is already running on port ${current}, not ${port}: stop the other run (Ctrl-C) or \`pg_ctl stop -D ${dataDir}\`, then run the command again.`);
+      throw new StackError(
+        `This project's ${profile} database is already running on port ${current}, not ${port}: stop the other run (Ctrl-C) or \`pg_ctl stop -D ${dataDir}\`, then run the command again.`,
+      );
     }
     return cluster;
   }
   await assertPortFree(port, "PostgreSQL", portVariable(profile, "PG_PORT"));
   const logFile = path.join(dataDir, "server.log");
   const start = asServerUser(path.join(bin, "pg_ctl"), [
-    "start", "-D", dataDir, "-l", logFile, "-w", "-t", "60",
-    "-o", `-p ${port} -c listen_addresses=127.0.0.1 -k ${dataDir} -c fsync=${profile === "test" ? "off" : "on"}`,
+    "start",
+    "-D",
+    dataDir,
+    "-l",
+    logFile,
+    "-w",
+    "-t",
+    "60",
+    "-o",
+    `-p ${port} -c listen_addresses=127.0.0.1 -k ${dataDir} -c fsync=${profile === "test" ? "off" : "on"}`,
   ]);
   if (start.status !== 0 || !isRunning(bin, dataDir)) {
     asServerUser(path.join(bin, "pg_ctl"), ["stop", "-D", dataDir, "-m", "immediate"]);

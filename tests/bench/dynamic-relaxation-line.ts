@@ -20,7 +20,8 @@ export function relaxManyNodeLine(line: ManyNodeLine, tolerance: number, maxStep
   // The stiffest piece of the stretch law sets the axial part of every mass: an element that stretches
   // into a stiffer piece within a step must not outrun its node's mass.
   let stiffest = 0;
-  for (let k = 1; k < line.tensions.length; k++) stiffest = Math.max(stiffest, (line.tensions[k] - line.tensions[k - 1]) / (line.strains[k] - line.strains[k - 1]));
+  for (let k = 1; k < line.tensions.length; k++)
+    stiffest = Math.max(stiffest, (line.tensions[k] - line.tensions[k - 1]) / (line.strains[k] - line.strains[k - 1]));
   const { x, y, load } = startingShape(line);
   const vx = new Float64Array(n + 1);
   const vy = new Float64Array(n + 1);

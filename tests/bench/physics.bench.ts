@@ -24,7 +24,13 @@ const walkerX = solveManyNodeLine(manyNode).walkerX;
   const relaxed = relaxManyNodeLine(manyNode, RELAXATION_TOLERANCE);
   const engine = solveLine(line, length, { force: walker, x: relaxed.walkerX }, mbs);
   const sag = (line.rise * relaxed.walkerX) / line.span - relaxed.walkerY;
-  const worst = Math.max(...[[engine.tensionA, relaxed.tensionA], [engine.tensionB, relaxed.tensionB], [engine.loadSag, sag]].map(([a, b]) => Math.abs(a - b) / Math.abs(b)));
+  const worst = Math.max(
+    ...[
+      [engine.tensionA, relaxed.tensionA],
+      [engine.tensionB, relaxed.tensionB],
+      [engine.loadSag, sag],
+    ].map(([a, b]) => Math.abs(a - b) / Math.abs(b)),
+  );
   if (!(worst < 2e-3)) throw new Error(`dynamic relaxation agrees with the engine only to ${(worst * 100).toFixed(3)} %, not 0.2 %`);
 }
 
@@ -40,11 +46,26 @@ for (let i = 0; i < samples; i++) {
 }
 
 export const benchmarks: Benchmark[] = [
-  { name: "One equilibrium solve, nonlinear curve (150 m, walker at 30 %)", goal: "≤ 20 µs", run: () => solveLine(line, length, { force: walker, x: walkerX }, mbs), batch: 200 },
+  {
+    name: "One equilibrium solve, nonlinear curve (150 m, walker at 30 %)",
+    goal: "≤ 20 µs",
+    run: () => solveLine(line, length, { force: walker, x: walkerX }, mbs),
+    batch: 200,
+  },
   { name: "Full evaluateRig (101-point sweep, leash fall, example rig)", goal: "≤ 5 ms", run: () => evaluateRig(rig), batch: 3 },
   { name: "Slip detection, 1,000,000-sample trace", goal: "≤ 200 ms", run: () => detectSlip({ time, force }, 200), samples: 9 },
-  { name: "Independent many-node model, same rig (400 elements), Newton on node positions", goal: "reference", run: () => solveManyNodeLine(manyNode), samples: 9 },
-  { name: "Same many-node model by dynamic relaxation to 0.2 % agreement", goal: "reference", run: () => relaxManyNodeLine(manyNode, RELAXATION_TOLERANCE), samples: 5 },
+  {
+    name: "Independent many-node model, same rig (400 elements), Newton on node positions",
+    goal: "reference",
+    run: () => solveManyNodeLine(manyNode),
+    samples: 9,
+  },
+  {
+    name: "Same many-node model by dynamic relaxation to 0.2 % agreement",
+    goal: "reference",
+    run: () => relaxManyNodeLine(manyNode, RELAXATION_TOLERANCE),
+    samples: 5,
+  },
 ];
 
 export const ratios: Ratio[] = [

@@ -34,7 +34,9 @@ function formatTime(ms: number): string {
 async function main() {
   const here = dirname(fileURLToPath(import.meta.url));
   const rows: string[] = [];
-  for (const file of readdirSync(here).filter((f) => f.endsWith(".bench.ts")).sort()) {
+  for (const file of readdirSync(here)
+    .filter((f) => f.endsWith(".bench.ts"))
+    .sort()) {
     const benchFile: { benchmarks?: Benchmark[]; ratios?: Ratio[] } = await import(pathToFileURL(join(here, file)).href);
     const medians = new Map<string, number>();
     for (const b of benchFile.benchmarks ?? []) {

@@ -45,7 +45,10 @@ async function uploadOverHttp(appUrl: string, file: string) {
     body: JSON.stringify({ email: DEMO_PEOPLE.find((p) => p.role === "rigger")!.email, password: DEMO_PASSWORD }),
   });
   if (!signIn.ok) throw new Error(`sign-in answered ${signIn.status}`);
-  const cookie = signIn.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const cookie = signIn.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
   const form = new FormData();
   form.append("file", new Blob([readFileSync(file)], { type: "text/csv" }), "bench-1m.csv");
   form.append("unit", "kN");
@@ -74,10 +77,16 @@ function reportFreshProcess(bytes: Uint8Array) {
   const file = join(tmpdir(), "spanwright-bench-trace-1m.csv");
   writeFileSync(file, bytes);
   const runChild = (env: Record<string, string>) =>
-    JSON.parse(execFileSync(process.execPath, [...process.execArgv, fileURLToPath(import.meta.url)], { env: { ...process.env, ...env }, encoding: "utf8" }).trim().split("\n").pop()!);
+    JSON.parse(
+      execFileSync(process.execPath, [...process.execArgv, fileURLToPath(import.meta.url)], { env: { ...process.env, ...env }, encoding: "utf8" })
+        .trim()
+        .split("\n")
+        .pop()!,
+    );
   const MiB = 1024 * 1024;
   const child = runChild({ TRACE_BENCH_FILE: file });
-  if (child.onset.kind !== "slipped" || Math.abs(child.onset.forceN - 8000) > 20) throw new Error(`the benchmark trace should slip at 8 kN, got ${JSON.stringify(child.onset)}`);
+  if (child.onset.kind !== "slipped" || Math.abs(child.onset.forceN - 8000) > 20)
+    throw new Error(`the benchmark trace should slip at 8 kN, got ${JSON.stringify(child.onset)}`);
   console.log(
     `Trace upload, 1,000,000 rows (${(bytes.byteLength / MiB).toFixed(1)} MiB of CSV), one run in a fresh process: ${(child.ms / 1000).toFixed(2)} s; ` +
       `peak RSS ${(child.maxRss / MiB).toFixed(0)} MiB (${(child.rssBefore / MiB).toFixed(0)} MiB before the upload, file bytes included); goal ≤ 3 s, ≤ 300 MB peak.\n`,
@@ -85,7 +94,9 @@ function reportFreshProcess(bytes: Uint8Array) {
   const appUrl = process.env.BENCH_APP_URL;
   if (appUrl) {
     const http = runChild({ TRACE_BENCH_FILE: file, TRACE_BENCH_HTTP: appUrl });
-    console.log(`The same trace uploaded to ${appUrl} over HTTP (parse, detect, S3 and database included): ${(http.ms / 1000).toFixed(2)} s, onset ${JSON.stringify(http.onset)}.\n`);
+    console.log(
+      `The same trace uploaded to ${appUrl} over HTTP (parse, detect, S3 and database included): ${(http.ms / 1000).toFixed(2)} s, onset ${JSON.stringify(http.onset)}.\n`,
+    );
   }
 }
 
@@ -103,5 +114,10 @@ const bytes = childFile ? new Uint8Array() : benchCsv(1_000_000);
 if (!childFile) reportFreshProcess(bytes);
 
 export const benchmarks: Benchmark[] = [
-  { name: "Trace upload on the server: type check, SHA-256, parse, detect, 1,000,000 rows", goal: "≤ 3 s end to end", run: () => serverPipeline(bytes), samples: 5 },
+  {
+    name: "Trace upload on the server: type check, SHA-256, parse, detect, 1,000,000 rows",
+    goal: "≤ 3 s end to end",
+    run: () => serverPipeline(bytes),
+    samples: 5,
+  },
 ];

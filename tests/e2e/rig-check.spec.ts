@@ -39,7 +39,9 @@ test("a rigger checks the worked example, changes it, sees bad input refused bes
   // The engine's own limit beyond the schema, beside its field: the pretension must stay below the mainline's MBS (32 kN).
   await span.fill("120");
   await page.getByLabel("Pretension, nobody on the line (kN)").fill("40");
-  await expect(page.getByLabel("Pretension, nobody on the line (kN)")).toHaveAccessibleDescription("Allowed: a pretension > 0 kN and below the mainline's MBS, 32 kN.");
+  await expect(page.getByLabel("Pretension, nobody on the line (kN)")).toHaveAccessibleDescription(
+    "Allowed: a pretension > 0 kN and below the mainline's MBS, 32 kN.",
+  );
   await expect(figure(page, "Tension at anchor A")).toHaveCount(0);
 
   await page.getByLabel("Pretension, nobody on the line (kN)").fill("3.5");

@@ -46,7 +46,9 @@ test("a lead exports the slip table and chart, publishes a read-only link, and r
   const csv = page.waitForEvent("download");
   await page.getByRole("link", { name: "Download table as CSV" }).click();
   const csvFile = await (await csv).path();
-  expect(readFileSync(csvFile, "utf8")).toMatch(/^device,rope_diameter_mm,tests,slips,lowest_slip_kN,slip_spread_kN,held_to_at_least_kN\r\n"Scree Line Grip",11\.0,1,1,4\.30/);
+  expect(readFileSync(csvFile, "utf8")).toMatch(
+    /^device,rope_diameter_mm,tests,slips,lowest_slip_kN,slip_spread_kN,held_to_at_least_kN\r\n"Scree Line Grip",11\.0,1,1,4\.30/,
+  );
   const png = page.waitForEvent("download");
   await page.getByRole("button", { name: "Save chart as PNG" }).click();
   const pngFile = readFileSync(await (await png).path());

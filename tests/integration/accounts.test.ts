@@ -144,7 +144,9 @@ describe("password reset", () => {
     const anyone = new AppClient();
     await anyone.post("/api/auth/forgot-password", { email: person.email });
     const older = linkIn(await latestMailTo(person.email), "/reset-password?token=").searchParams.get("token")!;
-    await testDb("password_resets").where({ user_id: person.id }).update({ created_at: testDb.raw("now() - interval '1 minute'") });
+    await testDb("password_resets")
+      .where({ user_id: person.id })
+      .update({ created_at: testDb.raw("now() - interval '1 minute'") });
     await anyone.post("/api/auth/forgot-password", { email: person.email });
     const latestToken = async () => linkIn(await latestMailTo(person.email), "/reset-password?token=").searchParams.get("token")!;
     await expect.poll(latestToken).not.toBe(older);
@@ -159,7 +161,9 @@ describe("password reset", () => {
     const person = await createPerson("stale");
     await new AppClient().post("/api/auth/forgot-password", { email: person.email });
     const token = linkIn(await latestMailTo(person.email), "/reset-password?token=").searchParams.get("token")!;
-    await testDb("password_resets").where({ user_id: person.id }).update({ expires_at: testDb.raw("now() - interval '1 second'") });
+    await testDb("password_resets")
+      .where({ user_id: person.id })
+      .update({ expires_at: testDb.raw("now() - interval '1 second'") });
     const stale = await new AppClient().post("/api/auth/reset-password", { token, password: "a-new-long-password" });
     expect(stale.status).toBe(410);
     expect((await stale.json()).error).toMatch(/more than an hour old/);
@@ -193,7 +197,9 @@ describe("invitations", () => {
     const owner = await AppClient.signedIn(crew.people.owner.email, FIXTURE_PASSWORD);
     const email = unique("meant");
     await owner.post("/api/crew/invitations", { email, role: "member" });
-    const token = linkIn(await latestMailTo(email), "/invitations/").pathname.split("/").pop()!;
+    const token = linkIn(await latestMailTo(email), "/invitations/")
+      .pathname.split("/")
+      .pop()!;
 
     const stranger = await createPerson("stranger");
     const other = await AppClient.signedIn(stranger.email, stranger.password);
@@ -201,7 +207,9 @@ describe("invitations", () => {
     expect(wrong.status).toBe(422);
     expect((await wrong.json()).error).toMatch(/another e-mail address/);
 
-    await testDb("invitations").where({ email }).update({ expires_at: testDb.raw("now() - interval '1 second'") });
+    await testDb("invitations")
+      .where({ email })
+      .update({ expires_at: testDb.raw("now() - interval '1 second'") });
     const meant = new AppClient();
     await meant.post("/api/auth/sign-up", { name: "Late", email, password: "long-enough-pw" });
     expect((await meant.post("/api/invitations/accept", { token })).status).toBe(410);
@@ -213,7 +221,9 @@ describe("invitations", () => {
     const second = unique("withdrawn");
     const { invitation } = await (await owner.post("/api/crew/invitations", { email: second, role: "member" })).json();
     expect((await owner.delete(`/api/crew/invitations/${invitation.id}`)).status).toBe(200);
-    const withdrawnToken = linkIn(await latestMailTo(second), "/invitations/").pathname.split("/").pop()!;
+    const withdrawnToken = linkIn(await latestMailTo(second), "/invitations/")
+      .pathname.split("/")
+      .pop()!;
     const late = new AppClient();
     await late.post("/api/auth/sign-up", { name: "Withdrawn", email: second, password: "long-enough-pw" });
     expect((await late.post("/api/invitations/accept", { token: withdrawnToken })).status).toBe(410);

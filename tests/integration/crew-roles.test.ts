@@ -82,7 +82,11 @@ describe("isolation between crews", () => {
     expect((await owner.delete(`/api/crew/invitations/${invitation.id}`)).status).toBe(404);
     expect((await owner.switchCrew(theirs.id)).status).toBe(404);
     const listed = await (await owner.get("/api/crew/members")).json();
-    expect(listed.members.map((m: { userId: string }) => m.userId).sort()).toEqual(Object.values(mine.people).map((p) => p.id).sort());
+    expect(listed.members.map((m: { userId: string }) => m.userId).sort()).toEqual(
+      Object.values(mine.people)
+        .map((p) => p.id)
+        .sort(),
+    );
     const untouched = await testDb("crew_members").where({ crew_id: theirs.id, user_id: theirs.people.member.id }).first();
     expect(untouched.role).toBe("member");
   });

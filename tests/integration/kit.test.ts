@@ -6,8 +6,31 @@ import { db } from "@/db/knex";
 
 // Invented gear of every kind, with specs inside the ranges the schema allows.
 const MODELS = {
-  webbing: { name: "Test tubular 25", specs: { widthMm: 25, massPerMetreG: 45, mbsKN: 30, stretchPoints: [{ tensionKN: 0, elongationPct: 0 }, { tensionKN: 5, elongationPct: 4 }] } },
-  rope: { name: "Test static 11", specs: { diameterMm: 11, construction: "static", mbsKN: 32, massPerMetreG: 80, stretchPoints: [{ tensionKN: 0, elongationPct: 0 }, { tensionKN: 1, elongationPct: 1.2 }] } },
+  webbing: {
+    name: "Test tubular 25",
+    specs: {
+      widthMm: 25,
+      massPerMetreG: 45,
+      mbsKN: 30,
+      stretchPoints: [
+        { tensionKN: 0, elongationPct: 0 },
+        { tensionKN: 5, elongationPct: 4 },
+      ],
+    },
+  },
+  rope: {
+    name: "Test static 11",
+    specs: {
+      diameterMm: 11,
+      construction: "static",
+      mbsKN: 32,
+      massPerMetreG: 80,
+      stretchPoints: [
+        { tensionKN: 0, elongationPct: 0 },
+        { tensionKN: 1, elongationPct: 1.2 },
+      ],
+    },
+  },
   brake: { name: "Test cam brake", specs: { minRopeMm: 9, maxRopeMm: 12, mbsKN: 20 } },
   line_grip: { name: "Test line grip", specs: { minRopeMm: 10, maxRopeMm: 11, mbsKN: 15 } },
   pulley: { name: "Test pulley 50", specs: { sheaveDiameterMm: 50, efficiency: 0.92, mbsKN: 36 } },
@@ -67,7 +90,13 @@ describe("gear models of every kind", () => {
     const notFromOrigin = await as.rigger.post("/api/kit/models", {
       kind: "rope",
       name: "x",
-      specs: { ...MODELS.rope.specs, stretchPoints: [{ tensionKN: 1, elongationPct: 1 }, { tensionKN: 2, elongationPct: 0.5 }] },
+      specs: {
+        ...MODELS.rope.specs,
+        stretchPoints: [
+          { tensionKN: 1, elongationPct: 1 },
+          { tensionKN: 2, elongationPct: 0.5 },
+        ],
+      },
     });
     const errors = (await notFromOrigin.json()).fieldErrors;
     expect(errors["specs.stretchPoints.0.tensionKN"]).toMatch(/origin/);
@@ -144,7 +173,11 @@ describe("inventory", () => {
     const edited = await as.lead.patch(`/api/kit/items/${item.id}`, { label: "R-07b", inServiceSince: "2025-05-02", notes: "" });
     expect((await edited.json()).item).toMatchObject({ label: "R-07b", inServiceSince: "2025-05-02" });
 
-    const inspected = await as.rigger.post(`/api/kit/items/${item.id}/inspections`, { inspectedOn: "2026-10-01", result: "watch", notes: "glazing near one end" });
+    const inspected = await as.rigger.post(`/api/kit/items/${item.id}/inspections`, {
+      inspectedOn: "2026-10-01",
+      result: "watch",
+      notes: "glazing near one end",
+    });
     expect(inspected.status).toBe(201);
     expect((await inspected.json()).inspection).toMatchObject({ result: "watch", inspectorName: crew.people.rigger.name });
 

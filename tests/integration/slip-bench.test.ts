@@ -57,7 +57,20 @@ beforeAll(async () => {
   as.outsider = await AppClient.signedIn(other.people.owner.email, other.people.owner.password);
   const brake = await (await as.rigger.post("/api/kit/models", { kind: "brake", name: "Bench cam", specs: { minRopeMm: 9, maxRopeMm: 12, mbsKN: 20 } })).json();
   const rope = await (
-    await as.rigger.post("/api/kit/models", { kind: "rope", name: "Bench static 10.5", specs: { diameterMm: 10.5, construction: "static", mbsKN: 28, massPerMetreG: 70, stretchPoints: [{ tensionKN: 0, elongationPct: 0 }, { tensionKN: 1, elongationPct: 1 }] } })
+    await as.rigger.post("/api/kit/models", {
+      kind: "rope",
+      name: "Bench static 10.5",
+      specs: {
+        diameterMm: 10.5,
+        construction: "static",
+        mbsKN: 28,
+        massPerMetreG: 70,
+        stretchPoints: [
+          { tensionKN: 0, elongationPct: 0 },
+          { tensionKN: 1, elongationPct: 1 },
+        ],
+      },
+    })
   ).json();
   brakeId = brake.model.id;
   ropeId = rope.model.id;
@@ -108,7 +121,13 @@ describe("a trace, detected, confirmed, in the slip table", () => {
     expect(await download.text()).toBe(text);
     expect((await as.outsider.get(`/api/uploads/${upload.id}`)).status).toBe(404);
 
-    const saved = await as.rigger.post("/api/slip-tests", { ...baseTest(), result: "slipped", force: Number((analysis.onset.forceN / 1000).toPrecision(4)), forceUnit: "kN", traceUploadId: upload.id });
+    const saved = await as.rigger.post("/api/slip-tests", {
+      ...baseTest(),
+      result: "slipped",
+      force: Number((analysis.onset.forceN / 1000).toPrecision(4)),
+      forceUnit: "kN",
+      traceUploadId: upload.id,
+    });
     expect(saved.status).toBe(201);
     const { test } = await saved.json();
     expect(test).toMatchObject({ result: "slipped", detectedResult: "slipped", traceUploadId: upload.id, testerName: crew.people.rigger.name });
@@ -132,7 +151,14 @@ describe("a trace, detected, confirmed, in the slip table", () => {
   });
 
   it("records held-to results as lower bounds, never as slips, and converts lbf", async () => {
-    const saved = await as.rigger.post("/api/slip-tests", { ...baseTest(), ropeDiameterMm: 11, ropeModelId: undefined, result: "held", force: 2000, forceUnit: "lbf" });
+    const saved = await as.rigger.post("/api/slip-tests", {
+      ...baseTest(),
+      ropeDiameterMm: 11,
+      ropeModelId: undefined,
+      result: "held",
+      force: 2000,
+      forceUnit: "lbf",
+    });
     expect(saved.status).toBe(201);
     expect((await saved.json()).test.forceN).toBeCloseTo(2000 * LBF, 6);
     const { table } = await (await as.member.get("/api/slip-table")).json();
@@ -153,7 +179,13 @@ describe("bad traces and bad values: a clear message each, nothing half saved", 
     ["no numeric force column", "time,comment\n0,start\n1,pull\n", { unit: "N", drop: "200" }, 422, /no numeric force column/],
     ["a row that does not parse", "time,force\n0,100\n1,200\n2,abc\n", { unit: "N", drop: "200" }, 422, /^Row 4: the force "abc" is not a number\.$/],
     ["times going backwards", "time,force\n0,100\n2,200\n1,300\n", { unit: "N", drop: "200" }, 422, /^Row 4: the time 1 is not after the previous row's/],
-    ["a force unit out of the bench's range", "time,force\n0,100\n1,4500\n", { unit: "kN", drop: "0.2" }, 422, /peaks at 4500\.00 kN, outside what a slip bench measures \(0\.1–50 kN\)/],
+    [
+      "a force unit out of the bench's range",
+      "time,force\n0,100\n1,4500\n",
+      { unit: "kN", drop: "0.2" },
+      422,
+      /peaks at 4500\.00 kN, outside what a slip bench measures \(0\.1–50 kN\)/,
+    ],
     ["an unknown unit", "time,force\n0,100\n1,4500\n", { unit: "tons", drop: "200" }, 400, /Choose the force unit: N, kN, lbf, kgf/],
     ["a binary file named .csv", new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0, 0, 0, 0]), { unit: "N", drop: "200" }, 415, /contents are not/],
     ["a file that is not a CSV by name", "time,force\n0,1\n", { unit: "N", drop: "200" }, 415, /does not end in one of those extensions/, "pull.xlsx"],

@@ -42,7 +42,13 @@ describe("photos and manuals", () => {
     const response = await as.rigger.post("/api/uploads?purpose=photo", fileForm(PNG, "sling.png", { itemId }));
     expect(response.status).toBe(201);
     const { upload } = await response.json();
-    expect(upload).toMatchObject({ purpose: "photo", contentType: "image/png", byteSize: PNG.byteLength, itemId, sha256: crypto.createHash("sha256").update(PNG).digest("hex") });
+    expect(upload).toMatchObject({
+      purpose: "photo",
+      contentType: "image/png",
+      byteSize: PNG.byteLength,
+      itemId,
+      sha256: crypto.createHash("sha256").update(PNG).digest("hex"),
+    });
     expect(upload.storageKey).toMatch(/^uploads\/[0-9a-f]{48}$/);
     expect(upload.storageKey).not.toContain(crew.id);
     const served = await as.member.get(`/api/uploads/${upload.id}`);
@@ -67,7 +73,12 @@ describe("photos and manuals", () => {
     ["a photo that is not an image", () => as.rigger.post("/api/uploads?purpose=photo", fileForm(PDF, "sling.png", { itemId })), 415, /contents are not/],
     ["a photo under a name no image has", () => as.rigger.post("/api/uploads?purpose=photo", fileForm(PNG, "sling.exe", { itemId })), 415, /JPEG, PNG or WebP/],
     ["a manual that is not a PDF", () => as.rigger.post("/api/uploads?purpose=manual", fileForm(PNG, "manual.pdf", { modelId })), 415, /contents are not/],
-    ["a photo over 15 MiB", () => as.rigger.post("/api/uploads?purpose=photo", fileForm(Buffer.concat([PNG, Buffer.alloc(15 * 1024 * 1024)]), "big.png", { itemId })), 413, /at most 15 MiB/],
+    [
+      "a photo over 15 MiB",
+      () => as.rigger.post("/api/uploads?purpose=photo", fileForm(Buffer.concat([PNG, Buffer.alloc(15 * 1024 * 1024)]), "big.png", { itemId })),
+      413,
+      /at most 15 MiB/,
+    ],
     ["an upload without a purpose", () => as.rigger.post("/api/uploads", fileForm(PNG, "sling.png", { itemId })), 400, /purpose=photo/],
     ["an upload without a file", () => as.rigger.post("/api/uploads?purpose=photo", new FormData()), 400, /Choose a file/],
     ["a body that is not a form", () => as.rigger.post("/api/uploads?purpose=photo", { file: "x" }), 400, /multipart\/form-data/],

@@ -22,15 +22,29 @@ export default async function KitPage() {
   ) : null;
   return (
     <>
-      <PageHeader title="Kit" lead="The crew's gear catalogue and inventory: webbing, rope, brakes, line grips, pulleys, connectors and slings." actions={addModel} />
+      <PageHeader
+        title="Kit"
+        lead="The crew's gear catalogue and inventory: webbing, rope, brakes, line grips, pulleys, connectors and slings."
+        actions={addModel}
+      />
       <div className="space-y-8">
         <section aria-labelledby="models-heading" className="space-y-3">
           <h2 id="models-heading">Gear models</h2>
-          {models.length ? <ModelTable models={models} /> : <EmptyState title="No gear recorded yet" action={addModel}>Record each model your crew uses with its specs, then add the items you own.</EmptyState>}
+          {models.length ? (
+            <ModelTable models={models} />
+          ) : (
+            <EmptyState title="No gear recorded yet" action={addModel}>
+              Record each model your crew uses with its specs, then add the items you own.
+            </EmptyState>
+          )}
         </section>
         <section aria-labelledby="items-heading" className="space-y-3">
           <h2 id="items-heading">Inventory</h2>
-          {items.length ? <ItemTable items={items} /> : <EmptyState title="No items yet">Add items from a gear model&apos;s page: one for each piece you own.</EmptyState>}
+          {items.length ? (
+            <ItemTable items={items} />
+          ) : (
+            <EmptyState title="No items yet">Add items from a gear model&apos;s page: one for each piece you own.</EmptyState>
+          )}
         </section>
         <CautionNotice compact />
       </div>

@@ -37,9 +37,15 @@ export default async function SlipBenchPage({ searchParams }: { searchParams: Pr
   ) : null;
   return (
     <>
-      <PageHeader title="Slip bench" lead="Slip tests of brakes and line grips on each rope diameter, with their load-cell traces. The planner's brake check reads this table." actions={record} />
+      <PageHeader
+        title="Slip bench"
+        lead="Slip tests of brakes and line grips on each rope diameter, with their load-cell traces. The planner's brake check reads this table."
+        actions={record}
+      />
       {tests.length === 0 ? (
-        <EmptyState title="No slip tests yet" action={record}>Results your gear testers record will build the crew&apos;s slip table here.</EmptyState>
+        <EmptyState title="No slip tests yet" action={record}>
+          Results your gear testers record will build the crew&apos;s slip table here.
+        </EmptyState>
       ) : (
         <div className="space-y-8">
           <section aria-labelledby="table-heading" className="space-y-3">
@@ -50,7 +56,8 @@ export default async function SlipBenchPage({ searchParams }: { searchParams: Pr
               </a>
             </div>
             <p className="max-w-prose text-ink-600">
-              Each cell: the lowest load at which the device slipped on that rope, the number of tests and the spread of the slips. “Held to ≥” means no test slipped: the slip load is at least that, and was never measured. Loads are cut down to 0.01 kN, never rounded up.
+              Each cell: the lowest load at which the device slipped on that rope, the number of tests and the spread of the slips. “Held to ≥” means no test
+              slipped: the slip load is at least that, and was never measured. Loads are cut down to 0.01 kN, never rounded up.
             </p>
             <SlipTableMatrix table={table} cellHref={(id, d) => `/slip-bench?device=${id}&diameter=${d}#tests-heading`} />
           </section>
@@ -83,7 +90,8 @@ function SlipCautions() {
   return (
     <div className="space-y-3">
       <p className="max-w-prose rounded-panel border-2 border-caution-500 bg-caution-100 p-4 text-caution-800">
-        ⚠ Slip loads vary with rope wear, diameter, sheath, temperature, wetness and pull rate. A bench result holds only for the device and rope it was measured on; keep a margin, back up every brake, and retest when the rope changes.
+        ⚠ Slip loads vary with rope wear, diameter, sheath, temperature, wetness and pull rate. A bench result holds only for the device and rope it was
+        measured on; keep a margin, back up every brake, and retest when the rope changes.
       </p>
       <CautionNotice compact />
     </div>

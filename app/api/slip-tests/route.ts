@@ -16,7 +16,10 @@ export const GET = crewRoute("slip.read", async ({ crew }, request) => {
   const deviceId = params.get("deviceId");
   const diameter = params.get("ropeDiameterMm");
   if (diameter !== null && !Number.isFinite(Number(diameter))) throw new RequestError(400, `ropeDiameterMm "${diameter}" is not a number of millimetres.`);
-  const tests = await listSlipTests(crew.id, { deviceId: deviceId ? rowId(deviceId, "device") : undefined, ropeDiameterMm: diameter === null ? undefined : Number(diameter) });
+  const tests = await listSlipTests(crew.id, {
+    deviceId: deviceId ? rowId(deviceId, "device") : undefined,
+    ropeDiameterMm: diameter === null ? undefined : Number(diameter),
+  });
   return NextResponse.json({ tests });
 });
 
@@ -39,6 +42,11 @@ export const POST = crewRoute("slip.write", async ({ crew, user }, request) => {
   if (isCorrection(analysis?.onset ?? null, test.result, forceN) && test.notes.trim() === "") {
     throw fieldError("notes", "You changed the value detected in the trace: say in the notes why, so the crew can see it was a correction.");
   }
-  const saved = await insertSlipTest(crew.id, { ...test, forceN, testedBy: user.id, detected: analysis ? { onset: analysis.onset, engineVersion: analysis.engineVersion } : null });
+  const saved = await insertSlipTest(crew.id, {
+    ...test,
+    forceN,
+    testedBy: user.id,
+    detected: analysis ? { onset: analysis.onset, engineVersion: analysis.engineVersion } : null,
+  });
   return NextResponse.json({ test: saved }, { status: 201 });
 });

@@ -11,7 +11,7 @@ import { isUuid } from "@/lib/validations/ids";
 export const POST = crewRoute("kit.write", async ({ crew, user }, request) => {
   const purposeField = request.nextUrl.searchParams.get("purpose");
   if (purposeField !== "photo" && purposeField !== "manual") {
-    throw new RequestError(400, 'Say what the file is with ?purpose=photo or ?purpose=manual (traces are uploaded on the Slip bench).');
+    throw new RequestError(400, "Say what the file is with ?purpose=photo or ?purpose=manual (traces are uploaded on the Slip bench).");
   }
   const purpose = purposeField;
   const { form, file, bytes } = await readUploadForm(request, purpose);
@@ -27,6 +27,15 @@ export const POST = crewRoute("kit.write", async ({ crew, user }, request) => {
   const sha256 = sha256Hex(bytes);
   const storageKey = randomStorageKey();
   await putObject(storageKey, bytes, contentType, sha256);
-  const upload = await insertUpload(crew.id, { purpose, storageKey, fileName: file.name, contentType, byteSize: bytes.byteLength, sha256, ...owner, uploadedBy: user.id });
+  const upload = await insertUpload(crew.id, {
+    purpose,
+    storageKey,
+    fileName: file.name,
+    contentType,
+    byteSize: bytes.byteLength,
+    sha256,
+    ...owner,
+    uploadedBy: user.id,
+  });
   return NextResponse.json({ upload }, { status: 201 });
 });

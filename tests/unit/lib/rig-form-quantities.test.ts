@@ -65,7 +65,9 @@ describe("what a person types", () => {
 
 describe("messages in the crew's units", () => {
   it("rewrites SI limits into SI display units and US units", () => {
-    expect(messageInUnits("a pretension > 0 N and below the mainline's MBS, 32000 N", "force", "si")).toBe("a pretension > 0 kN and below the mainline's MBS, 32 kN");
+    expect(messageInUnits("a pretension > 0 N and below the mainline's MBS, 32000 N", "force", "si")).toBe(
+      "a pretension > 0 kN and below the mainline's MBS, 32 kN",
+    );
     expect(messageInUnits("a horizontal span > 0 m and ≤ 3000 m", "length", "us")).toBe("a horizontal span > 0 ft and ≤ 9842.52 ft");
     // 4000 N / 4.448 221 615 260 5 N/lbf (NIST SP 811) = 899.2358 lbf, shown to six figures
     expect(messageInUnits("more than the previous point's 4 kN (tensions strictly increasing)", "stretchTension", "us")).toBe(

@@ -3,7 +3,14 @@ import fc from "fast-check";
 import { buildSlipTable, cellKey, isCorrection, slipTableCsv, toSlipResults, type SlipTableTest } from "@/lib/slip-table";
 import { checkBrake } from "@/physics";
 
-const test = (id: string, deviceId: string, d: number, result: "slipped" | "held", forceN: number): SlipTableTest => ({ id, deviceId, deviceName: deviceId === "a" ? "Alpha cam" : "Beta grip", ropeDiameterMm: d, result, forceN });
+const test = (id: string, deviceId: string, d: number, result: "slipped" | "held", forceN: number): SlipTableTest => ({
+  id,
+  deviceId,
+  deviceName: deviceId === "a" ? "Alpha cam" : "Beta grip",
+  ropeDiameterMm: d,
+  result,
+  forceN,
+});
 
 describe("buildSlipTable", () => {
   const tests = [

@@ -4,7 +4,11 @@ import { demoLine, MBS, relative, STIFF, STRETCHY } from "./fixtures";
 
 describe("leashFallPeak", () => {
   it("on a linear spring gives F = mg(1 + √(1 + 2kh/(mg))) (dynamics texts, mass dropped onto a spring) within 0.1 %", () => {
-    for (const [m, h, k] of [[80, 2, 2000], [60, 0.5, 15000], [100, 3, 600]]) {
+    for (const [m, h, k] of [
+      [80, 2, 2000],
+      [60, 0.5, 15000],
+      [100, 3, 600],
+    ]) {
       const peak = leashFallPeak(m, h, (u) => k * u);
       const mg = m * STANDARD_GRAVITY;
       expect(relative(peak.peakLoad, mg * (1 + Math.sqrt(1 + (2 * k * h) / mg)))).toBeLessThan(1e-3);

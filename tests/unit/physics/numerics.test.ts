@@ -20,7 +20,13 @@ describe("GAUSS_LOBATTO_5", () => {
 describe("newtonSolve", () => {
   it("solves a small nonlinear system and raises SolveError when it cannot", () => {
     const system = {
-      evaluate: (x: number[]) => ({ residual: [x[0] * x[0] + x[1] * x[1] - 4, x[0] - x[1]], jacobian: [[2 * x[0], 2 * x[1]], [1, -1]] }),
+      evaluate: (x: number[]) => ({
+        residual: [x[0] * x[0] + x[1] * x[1] - 4, x[0] - x[1]],
+        jacobian: [
+          [2 * x[0], 2 * x[1]],
+          [1, -1],
+        ],
+      }),
       isValid: () => true,
     };
     const { x } = newtonSolve(system, [1, 0.5], { what: "test" });

@@ -3,7 +3,6 @@ import { describe, expect, it } from "vitest";
 import { lengthForPretension, solveLine, STANDARD_GRAVITY } from "../../../physics";
 import { demoLine, MBS, STIFF, STRETCHY } from "./fixtures";
 
-
 // Property tests (fast-check), kept to a modest number of runs. The properties come from physical
 // reasoning, not an outside table: a tighter or more heavily loaded cable pulls harder (statics of a
 // cable under a point load, T = W / (2 sin θ) with θ shrinking as pretension grows), and a level line

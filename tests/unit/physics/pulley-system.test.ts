@@ -31,8 +31,14 @@ describe("analysePulleySystem", () => {
 
   it("rejects impossible systems, naming the field", () => {
     expect(() => analysePulleySystem({ stages: [], sheaveEfficiency: 0.9, brake: { on: "tail" } }, 1, 1)).toThrow(RigInputError);
-    expect(() => analysePulleySystem({ stages: [2.5], sheaveEfficiency: 0.9, brake: { on: "tail" } }, 1, 1)).toThrow(expect.objectContaining({ field: "tensioning.stages.0.ratio" }));
-    expect(() => analysePulleySystem({ stages: [3], sheaveEfficiency: 1.2, brake: { on: "tail" } }, 1, 1)).toThrow(expect.objectContaining({ field: "tensioning.sheaveEfficiency" }));
-    expect(() => analysePulleySystem({ stages: [3], sheaveEfficiency: 0.9, brake: { on: "stage", stage: 2 } }, 1, 1)).toThrow(expect.objectContaining({ field: "tensioning.brake.stage" }));
+    expect(() => analysePulleySystem({ stages: [2.5], sheaveEfficiency: 0.9, brake: { on: "tail" } }, 1, 1)).toThrow(
+      expect.objectContaining({ field: "tensioning.stages.0.ratio" }),
+    );
+    expect(() => analysePulleySystem({ stages: [3], sheaveEfficiency: 1.2, brake: { on: "tail" } }, 1, 1)).toThrow(
+      expect.objectContaining({ field: "tensioning.sheaveEfficiency" }),
+    );
+    expect(() => analysePulleySystem({ stages: [3], sheaveEfficiency: 0.9, brake: { on: "stage", stage: 2 } }, 1, 1)).toThrow(
+      expect.objectContaining({ field: "tensioning.brake.stage" }),
+    );
   });
 });

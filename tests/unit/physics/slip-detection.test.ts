@@ -33,7 +33,11 @@ function trace(onset: number | null, amplitude: number, seed: number) {
 }
 
 describe("detectSlip", () => {
-  it.each([[6000, 20, 1], [12500, 50, 2], [3100, 5, 3]])("finds a known onset at %s N through noise within 1 %", (onset, amplitude, seed) => {
+  it.each([
+    [6000, 20, 1],
+    [12500, 50, 2],
+    [3100, 5, 3],
+  ])("finds a known onset at %s N through noise within 1 %", (onset, amplitude, seed) => {
     const result = detectSlip(trace(onset, amplitude, seed), 300);
     expect(result.kind).toBe("slipped");
     expect(Math.abs(result.forceN - onset) / onset).toBeLessThan(0.01);

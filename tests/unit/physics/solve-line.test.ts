@@ -6,7 +6,15 @@ import { manyNodeLine, solveManyNodeLine, type ManyNodeLine } from "./reference/
 
 /** A linear stretch law ε = T / EA, written as a two-point curve (the last slope carries on). */
 function linearLine(span: number, rise: number, weight: number, EA: number): Line {
-  return { span, rise, weight, curve: createStretchCurve([{ tensionKN: 0, elongationPct: 0 }, { tensionKN: 10, elongationPct: (100 * 10000) / EA }]) };
+  return {
+    span,
+    rise,
+    weight,
+    curve: createStretchCurve([
+      { tensionKN: 0, elongationPct: 0 },
+      { tensionKN: 10, elongationPct: (100 * 10000) / EA },
+    ]),
+  };
 }
 
 /** 2 × 2 Newton with a finite-difference Jacobian, for the closed forms below. */
@@ -19,7 +27,10 @@ function solve2(f: (p: [number, number]) => [number, number], start: [number, nu
     const h1 = 1e-7 * Math.max(1, Math.abs(p[1]));
     const a = f([p[0] + h0, p[1]]);
     const b = f([p[0], p[1] + h1]);
-    const j = [[(a[0] - r[0]) / h0, (b[0] - r[0]) / h1], [(a[1] - r[1]) / h0, (b[1] - r[1]) / h1]];
+    const j = [
+      [(a[0] - r[0]) / h0, (b[0] - r[0]) / h1],
+      [(a[1] - r[1]) / h0, (b[1] - r[1]) / h1],
+    ];
     const det = j[0][0] * j[1][1] - j[0][1] * j[1][0];
     p = [p[0] - (j[1][1] * r[0] - j[0][1] * r[1]) / det, p[1] - (-j[1][0] * r[0] + j[0][0] * r[1]) / det];
   }
@@ -45,7 +56,7 @@ describe("solveLine against published closed forms", () => {
       const d = sagAt(line, s.variables, 12.5);
       expect(d / 25).toBeLessThan(0.05);
       // load per horizontal metre q = wL/D
-      expect(relative(s.variables.H, ((w * L) / 25) * 25 ** 2 / (8 * d))).toBeLessThan(5e-3);
+      expect(relative(s.variables.H, (((w * L) / 25) * 25 ** 2) / (8 * d))).toBeLessThan(5e-3);
     }
   });
 
@@ -72,10 +83,14 @@ describe("solveLine against published closed forms", () => {
     // Irvine's elastic catenary in Lagrangian form, y up, V(s) = VA + w·s:
     // x(s) = H·s/EA + (H/w)[asinh(V(s)/H) − asinh(VA/H)]
     // y(s) = (VA·s + w·s²/2)/EA + (H/w)[√(1 + (V(s)/H)²) − √(1 + (VA/H)²)]
-    for (const [D, h, w, EA, L] of [[25, 1, 0.6, 2e5, 24.7], [150, 4, 0.5, 1e5, 148], [500, -12, 0.9, 3e5, 498]]) {
+    for (const [D, h, w, EA, L] of [
+      [25, 1, 0.6, 2e5, 24.7],
+      [150, 4, 0.5, 1e5, 148],
+      [500, -12, 0.9, 3e5, 498],
+    ]) {
       const x = (H: number, VA: number) => (H * L) / EA + (H / w) * (Math.asinh((VA + w * L) / H) - Math.asinh(VA / H));
       const y = (H: number, VA: number) => (VA * L + (w * L * L) / 2) / EA + (H / w) * (Math.hypot(1, (VA + w * L) / H) - Math.hypot(1, VA / H));
-      const [H, VA] = solve2(([H, VA]) => [x(H, VA) - D, y(H, VA) - h], [EA * (D / L - 1) + 100, -w * L / 2]);
+      const [H, VA] = solve2(([H, VA]) => [x(H, VA) - D, y(H, VA) - h], [EA * (D / L - 1) + 100, (-w * L) / 2]);
       const s = solveLine(linearLine(D, h, w, EA), L, { force: 0, x: D / 2 }, 1e9);
       expect(relative(s.variables.H, H)).toBeLessThan(1e-6);
       expect(relative(s.variables.VA, VA)).toBeLessThan(1e-6);
@@ -98,7 +113,10 @@ describe("solveLine against an independent many-node model (400 elements), solve
   ];
   for (const { method, fractions, agreement, solve } of solvers) {
     for (const c of cases) {
-      for (const [curveName, points] of [["stretchy", STRETCHY], ["stiff", STIFF]] as const) {
+      for (const [curveName, points] of [
+        ["stretchy", STRETCHY],
+        ["stiff", STIFF],
+      ] as const) {
         for (const fraction of fractions) {
           it(`${method}: ${c.name}, ${curveName} curve, walker at ${fraction * 100} %: anchor tensions and sag within ${agreement * 100} %`, () => {
             const line = demoLine(c.span, c.rise, c.mass, points);

@@ -25,11 +25,48 @@ describe("createStretchCurve / strainAt", () => {
 
   it.each([
     ["fewer than two points", [{ tensionKN: 0, elongationPct: 0 }], "stretchPoints"],
-    ["not through the origin", [{ tensionKN: 1, elongationPct: 1 }, { tensionKN: 2, elongationPct: 2 }], "stretchPoints.0"],
-    ["tension not increasing", [{ tensionKN: 0, elongationPct: 0 }, { tensionKN: 2, elongationPct: 1 }, { tensionKN: 2, elongationPct: 2 }], "stretchPoints.2.tensionKN"],
-    ["elongation not increasing", [{ tensionKN: 0, elongationPct: 0 }, { tensionKN: 2, elongationPct: 1 }, { tensionKN: 3, elongationPct: 0.5 }], "stretchPoints.2.elongationPct"],
-    ["a negative value", [{ tensionKN: 0, elongationPct: 0 }, { tensionKN: -2, elongationPct: 1 }], "stretchPoints.1.tensionKN"],
-    ["NaN", [{ tensionKN: 0, elongationPct: 0 }, { tensionKN: NaN, elongationPct: 1 }], "stretchPoints.1.tensionKN"],
+    [
+      "not through the origin",
+      [
+        { tensionKN: 1, elongationPct: 1 },
+        { tensionKN: 2, elongationPct: 2 },
+      ],
+      "stretchPoints.0",
+    ],
+    [
+      "tension not increasing",
+      [
+        { tensionKN: 0, elongationPct: 0 },
+        { tensionKN: 2, elongationPct: 1 },
+        { tensionKN: 2, elongationPct: 2 },
+      ],
+      "stretchPoints.2.tensionKN",
+    ],
+    [
+      "elongation not increasing",
+      [
+        { tensionKN: 0, elongationPct: 0 },
+        { tensionKN: 2, elongationPct: 1 },
+        { tensionKN: 3, elongationPct: 0.5 },
+      ],
+      "stretchPoints.2.elongationPct",
+    ],
+    [
+      "a negative value",
+      [
+        { tensionKN: 0, elongationPct: 0 },
+        { tensionKN: -2, elongationPct: 1 },
+      ],
+      "stretchPoints.1.tensionKN",
+    ],
+    [
+      "NaN",
+      [
+        { tensionKN: 0, elongationPct: 0 },
+        { tensionKN: NaN, elongationPct: 1 },
+      ],
+      "stretchPoints.1.tensionKN",
+    ],
   ])("rejects a curve with %s, naming the field", (_, points, field) => {
     expect(() => createStretchCurve(points)).toThrow(RigInputError);
     expect(() => createStretchCurve(points)).toThrow(expect.objectContaining({ field, allowed: expect.stringMatching(/.{6,}/) }));

@@ -14,7 +14,12 @@ describe("units", () => {
   });
 
   it("agrees with mathjs units (a general-purpose reference library)", () => {
-    for (const [value, u] of [[3.2, "kN"], [750, "lbf"], [120, "kgf"], [5, "N"]] as const) {
+    for (const [value, u] of [
+      [3.2, "kN"],
+      [750, "lbf"],
+      [120, "kgf"],
+      [5, "N"],
+    ] as const) {
       expect(toNewtons(value, u)).toBeCloseTo(unit(value, u).toNumber("N"), 9);
     }
     expect(toMetres(400, "ft")).toBeCloseTo(unit(400, "ft").toNumber("m"), 12);

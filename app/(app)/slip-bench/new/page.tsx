@@ -14,7 +14,10 @@ export default async function NewSlipTestPage() {
   const [devices, ropes] = await Promise.all([listModels(crew.id, SLIP_DEVICE_KINDS), listModels(crew.id, ["rope"])]);
   return (
     <>
-      <PageHeader title="Record a slip test" lead="Pull the rope through the device slowly on a load cell; record where it slipped, or the load it held to when you stopped." />
+      <PageHeader
+        title="Record a slip test"
+        lead="Pull the rope through the device slowly on a load cell; record where it slipped, or the load it held to when you stopped."
+      />
       {devices.length === 0 ? (
         <EmptyState title="No brakes or line grips in the Kit" action={<Link href="/kit/new">Add one to the Kit</Link>}>
           A slip test is of a device in your crew&apos;s Kit.

@@ -9,7 +9,10 @@ import { startSession } from "@/lib/auth/session";
 export const POST = route(async (request) => {
   const input = await parseBody(request, signUpSchema);
   const user = await createUser({ email: input.email, name: input.name, passwordHash: await hashPassword(input.password) });
-  if (!user) throw new RequestError(409, "An account with that e-mail already exists: sign in, or reset its password.", { email: "This e-mail already has an account." });
+  if (!user)
+    throw new RequestError(409, "An account with that e-mail already exists: sign in, or reset its password.", {
+      email: "This e-mail already has an account.",
+    });
   await startSession(user.id, request.headers.get("user-agent"));
   return NextResponse.json({ user: { name: user.name, email: user.email } }, { status: 201 });
 });

@@ -24,6 +24,15 @@ export const POST = crewRoute("slip.write", async ({ crew, user }, request) => {
   const sha256 = sha256Hex(bytes);
   const storageKey = randomStorageKey();
   await putObject(storageKey, bytes, contentType, sha256);
-  const upload = await insertUpload(crew.id, { purpose: "trace", storageKey, fileName: file.name, contentType, byteSize: bytes.byteLength, sha256, analysis, uploadedBy: user.id });
+  const upload = await insertUpload(crew.id, {
+    purpose: "trace",
+    storageKey,
+    fileName: file.name,
+    contentType,
+    byteSize: bytes.byteLength,
+    sha256,
+    analysis,
+    uploadedBy: user.id,
+  });
   return NextResponse.json({ upload: { id: upload.id, fileName: upload.fileName, sha256 }, analysis }, { status: 201 });
 });

@@ -13,7 +13,8 @@ export const GET = crewRoute<{ id: string }>("kit.read", async ({ crew }, _reque
   if (!upload) throw new RequestError(404, "No such file in this crew.");
   const body = await getObjectStream(upload.storageKey);
   // The demo seed's traces keep only their analysis when seeding ran without a bucket.
-  if (!body) throw new RequestError(404, `The bytes of "${upload.fileName}" are not in storage; its recorded analysis is kept. Upload the file again to keep a copy.`);
+  if (!body)
+    throw new RequestError(404, `The bytes of "${upload.fileName}" are not in storage; its recorded analysis is kept. Upload the file again to keep a copy.`);
   const disposition = upload.purpose === "trace" ? "attachment" : "inline";
   return new Response(body, {
     headers: {

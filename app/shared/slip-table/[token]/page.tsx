@@ -13,7 +13,14 @@ export default async function SharedSlipTablePage({ params }: { params: Promise<
   const { token } = await params;
   const crew = /^[\w-]{20,64}$/.test(token) ? await crewOfSlipTableToken(token) : null;
   if (!crew) notFound();
-  const tests = (await listSlipTests(crew.id)).map(({ id, deviceId, deviceName, ropeDiameterMm, result, forceN }) => ({ id, deviceId, deviceName, ropeDiameterMm, result, forceN }));
+  const tests = (await listSlipTests(crew.id)).map(({ id, deviceId, deviceName, ropeDiameterMm, result, forceN }) => ({
+    id,
+    deviceId,
+    deviceName,
+    ropeDiameterMm,
+    result,
+    forceN,
+  }));
   const table = buildSlipTable(tests);
   return (
     <main className="mx-auto max-w-page space-y-6 px-gutter py-8">
@@ -21,7 +28,8 @@ export default async function SharedSlipTablePage({ params }: { params: Promise<
         <p className="font-bold text-spruce-800">Spanwright</p>
         <h1>Slip table of {crew.name}</h1>
         <p className="mt-1 max-w-prose text-ink-600">
-          Shared read-only by the crew. Each cell gives the lowest load at which the device slipped on that rope diameter; “held to ≥” is a lower bound: no test slipped. Loads are cut down to 0.01 kN, never rounded up.
+          Shared read-only by the crew. Each cell gives the lowest load at which the device slipped on that rope diameter; “held to ≥” is a lower bound: no test
+          slipped. Loads are cut down to 0.01 kN, never rounded up.
         </p>
       </header>
       {tests.length === 0 ? (
@@ -35,7 +43,8 @@ export default async function SharedSlipTablePage({ params }: { params: Promise<
         </>
       )}
       <p className="max-w-prose rounded-panel border-2 border-caution-500 bg-caution-100 p-4 text-caution-800">
-        ⚠ These are one crew&apos;s bench results on its own gear. Slip loads vary with rope wear, diameter, sheath, temperature, wetness and pull rate: test your own device on your own rope.
+        ⚠ These are one crew&apos;s bench results on its own gear. Slip loads vary with rope wear, diameter, sheath, temperature, wetness and pull rate: test
+        your own device on your own rope.
       </p>
       <CautionNotice compact />
     </main>

@@ -44,7 +44,11 @@ export default async function GearItemPage({ params }: { params: Promise<{ id: s
         }
       />
       <div className="space-y-8">
-        {item.retiredOn ? <p className="rounded-panel bg-ink-100 p-4">Retired on {item.retiredOn}: {item.retiredReason}. It cannot be put in a new plan.</p> : null}
+        {item.retiredOn ? (
+          <p className="rounded-panel bg-ink-100 p-4">
+            Retired on {item.retiredOn}: {item.retiredReason}. It cannot be put in a new plan.
+          </p>
+        ) : null}
         {item.notes ? <p className="max-w-prose whitespace-pre-line">{item.notes}</p> : null}
         <section aria-labelledby="inspections-heading" className="space-y-3">
           <h2 id="inspections-heading">Inspection log</h2>

@@ -31,7 +31,11 @@ export default async function GearModelPage({ params }: { params: Promise<{ id: 
     <>
       <PageHeader
         title={model.name}
-        lead={<>{GEAR_KIND_LABELS[model.kind]} · <StatusBadge retiredOn={model.retiredOn} /></>}
+        lead={
+          <>
+            {GEAR_KIND_LABELS[model.kind]} · <StatusBadge retiredOn={model.retiredOn} />
+          </>
+        }
         actions={
           writer ? (
             <>
@@ -48,7 +52,11 @@ export default async function GearModelPage({ params }: { params: Promise<{ id: 
         }
       />
       <div className="space-y-8">
-        {model.retiredOn ? <p className="rounded-panel bg-ink-100 p-4">Retired on {model.retiredOn}: {model.retiredReason}. No new items or plans may use it.</p> : null}
+        {model.retiredOn ? (
+          <p className="rounded-panel bg-ink-100 p-4">
+            Retired on {model.retiredOn}: {model.retiredReason}. No new items or plans may use it.
+          </p>
+        ) : null}
         <section aria-labelledby="specs-heading" className="space-y-3">
           <h2 id="specs-heading">Specs</h2>
           <SpecTable specs={model.specs} />

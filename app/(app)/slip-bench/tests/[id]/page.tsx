@@ -28,17 +28,19 @@ export default async function SlipTestPage({ params }: { params: Promise<{ id: s
       <div className="space-y-6">
         <dl className="grid max-w-2xl grid-cols-[auto_1fr] gap-x-6 gap-y-2 rounded-panel border border-ink-200 bg-white p-4">
           <dt className="font-semibold">Rope</dt>
-          <dd>{test.ropeModelName ?? "Not in the Kit"}, {test.ropeDiameterMm.toFixed(1)} mm</dd>
-          <dt className="font-semibold">Result</dt>
           <dd>
-            {test.result === "slipped" ? `Slipped at ${shown(test.forceN)}` : `Held to ${shown(test.forceN)}: no slip, the slip load is at least this`}
+            {test.ropeModelName ?? "Not in the Kit"}, {test.ropeDiameterMm.toFixed(1)} mm
           </dd>
+          <dt className="font-semibold">Result</dt>
+          <dd>{test.result === "slipped" ? `Slipped at ${shown(test.forceN)}` : `Held to ${shown(test.forceN)}: no slip, the slip load is at least this`}</dd>
           {analysis ? (
             <>
               <dt className="font-semibold">Trace</dt>
               <dd>
-                Detected {analysis.onset.kind === "slipped" ? "slipped at" : "held to"} {shown(analysis.onset.forceN)} (drop {shown(analysis.dropN)}{analysis.pullEndS ? `, pull ended at ${analysis.pullEndS} s` : ""}, engine {analysis.engineVersion});{" "}
-                {corrected ? "corrected by the tester (see notes)" : "confirmed by the tester"}. <a href={`/api/uploads/${test.traceUploadId}`}>Download the trace</a>
+                Detected {analysis.onset.kind === "slipped" ? "slipped at" : "held to"} {shown(analysis.onset.forceN)} (drop {shown(analysis.dropN)}
+                {analysis.pullEndS ? `, pull ended at ${analysis.pullEndS} s` : ""}, engine {analysis.engineVersion});{" "}
+                {corrected ? "corrected by the tester (see notes)" : "confirmed by the tester"}.{" "}
+                <a href={`/api/uploads/${test.traceUploadId}`}>Download the trace</a>
               </dd>
             </>
           ) : null}

@@ -20,7 +20,9 @@ export const PATCH = crewRoute<Params>("kit.write", async ({ crew }, request, { 
   const current = await findItem(crew.id, rowId(id, "item"));
   if (!current) throw new RequestError(404, "No such item in this crew.");
   if (current.retiredOn && edit.inServiceSince > current.retiredOn) {
-    throw new RequestError(400, `In service since cannot be after the day it was retired (${current.retiredOn}).`, { inServiceSince: "After the retirement date." });
+    throw new RequestError(400, `In service since cannot be after the day it was retired (${current.retiredOn}).`, {
+      inServiceSince: "After the retirement date.",
+    });
   }
   return NextResponse.json({ item: await updateItem(crew.id, id, edit) });
 });

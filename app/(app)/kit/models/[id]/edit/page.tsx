@@ -14,7 +14,10 @@ export default async function EditGearModelPage({ params }: { params: Promise<{ 
   const model = await crewRowOrNotFound(findModel, crew.id, id);
   return (
     <>
-      <PageHeader title={`Edit ${model.name}`} lead="Changes apply to every item of this model; plans already signed off keep the specs they were checked with." />
+      <PageHeader
+        title={`Edit ${model.name}`}
+        lead="Changes apply to every item of this model; plans already signed off keep the specs they were checked with."
+      />
       <GearModelForm model={{ id, kind: model.kind, name: model.name, notes: model.notes, specs: model.specs } as { id: string } & GearModelInput} />
     </>
   );
