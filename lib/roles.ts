@@ -13,6 +13,9 @@ export const PERMISSIONS = {
   "slip.write": "rigger",
   "slip.publish": "lead",
   "rig.read": "member",
+  "rig.write": "rigger",
+  "site.read": "member",
+  "site.write": "rigger",
 } as const satisfies Record<string, Role>;
 
 export type Action = keyof typeof PERMISSIONS;

@@ -3,6 +3,7 @@ import * as crewsAndPeople from "./20261201000001_crews_and_people";
 import * as accountsAndInvitations from "./20261201000002_accounts_and_invitations";
 import * as kit from "./20261201000010_kit";
 import * as slipTests from "./20261201000011_slip_tests";
+import * as sitesAndRigs from "./20261201000020_sites_and_rigs";
 
 // Every migration, in order, imported statically so that the same list loads under tsx, Vitest
 // and the Next.js server bundle alike. A unit test checks that no file of this folder is missing.
@@ -11,6 +12,7 @@ const migrations: Record<string, Knex.Migration> = {
   "20261201000002_accounts_and_invitations.ts": accountsAndInvitations,
   "20261201000010_kit.ts": kit,
   "20261201000011_slip_tests.ts": slipTests,
+  "20261201000020_sites_and_rigs.ts": sitesAndRigs,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

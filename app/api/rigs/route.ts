@@ -1,0 +1,25 @@
+import { NextResponse } from "next/server";
+import { crewRoute, parseBody } from "@/lib/api";
+import { invalidInput, RequestError } from "@/lib/http-errors";
+import { NewRigSchema, RigListQuerySchema } from "@/lib/validations/rigs";
+import { revisionOfRecord } from "@/lib/planner/revision-of-record";
+import { createRig, findRevision, findRig, listRigs } from "@/db/rigs";
+import { findSite } from "@/db/sites";
+
+export const GET = crewRoute("rig.read", async ({ crew }, request) => {
+  const query = RigListQuerySchema.safeParse(Object.fromEntries(request.nextUrl.searchParams));
+  if (!query.success) throw invalidInput(query.error);
+  return NextResponse.json({ ...(await listRigs(crew.id, query.data)), page: query.data.page, pageSize: query.data.pageSize });
+});
+
+export const POST = crewRoute("rig.write", async ({ crew, user }, request) => {
+  const body = await parseBody(request, NewRigSchema);
+  if (body.siteId && (await findSite(crew.id, body.siteId))?.archivedAt) {
+    throw new RequestError(400, "Site: that site is archived; bring it back on its page before planning a new rig on it.", {
+      siteId: "This site is archived.",
+    });
+  }
+  const revision = await revisionOfRecord(crew.id, crew.units, body);
+  const { rigId, revisionId } = await createRig(crew.id, user.id, revision);
+  return NextResponse.json({ rig: await findRig(crew.id, rigId), revision: await findRevision(crew.id, rigId, revisionId) }, { status: 201 });
+});
