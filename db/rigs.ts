@@ -1,23 +1,16 @@
 import type { Knex } from "knex";
 import { db } from "./knex";
 import type { RigResult } from "@/physics";
-import type { RevisionState, RigListQuery } from "@/lib/validations/rigs";
+import type { RevisionMeta, RigListQuery } from "@/lib/validations/rigs";
+
+export type { RevisionMeta };
 import type { RevisionSnapshot } from "@/lib/planner/kit";
+import { revisionRow, type NewRevision } from "@/lib/planner/revision-row";
+
+export type { NewRevision };
 
 // Rigs and their revisions. A revision is written once and never changed (a trigger refuses it); a
 // rig's current revision is its highest-numbered one. Every query is scoped by crew id.
-
-export interface RevisionMeta {
-  id: string;
-  number: number;
-  state: RevisionState;
-  basedOnId: string | null;
-  engineVersion: string;
-  spanM: number;
-  mainlineName: string;
-  authorName: string | null;
-  createdAt: string;
-}
 
 export interface Revision extends RevisionMeta {
   rigId: string;
@@ -35,17 +28,6 @@ export interface RigRow {
   createdAt: string;
   revisionCount: number;
   head: RevisionMeta;
-}
-
-export interface NewRevision {
-  name: string;
-  siteId: string | null;
-  inputs: Record<string, unknown>;
-  snapshot: RevisionSnapshot;
-  result: RigResult;
-  engineVersion: string;
-  spanM: number;
-  mainlineName: string;
 }
 
 const metaColumns = (table: string) => [
@@ -154,25 +136,11 @@ export async function findRig(crewId: string, id: string): Promise<RigRow | null
   return (await rigsWithHead(crewId).where("rigs.id", id).first(rigColumns)) ?? null;
 }
 
-function revisionColumns(crewId: string, rigId: string, authorId: string, revision: NewRevision) {
-  return {
-    crew_id: crewId,
-    rig_id: rigId,
-    inputs: JSON.stringify(revision.inputs),
-    snapshot: JSON.stringify(revision.snapshot),
-    result: JSON.stringify(revision.result),
-    engine_version: revision.engineVersion,
-    span_m: revision.spanM,
-    mainline_name: revision.mainlineName,
-    author_id: authorId,
-  };
-}
-
 export async function createRig(crewId: string, userId: string, revision: NewRevision): Promise<{ rigId: string; revisionId: string }> {
   return db.transaction(async (trx) => {
     const [{ id: rigId }] = await trx("rigs").insert({ crew_id: crewId, site_id: revision.siteId, name: revision.name, created_by: userId }).returning("id");
     const [{ id: revisionId }] = await trx("rig_revisions")
-      .insert({ ...revisionColumns(crewId, rigId, userId, revision), number: 1 })
+      .insert({ ...revisionRow(crewId, rigId, userId, revision), number: 1 })
       .returning("id");
     return { rigId, revisionId };
   });
@@ -192,7 +160,7 @@ export async function saveRevision(crewId: string, rigId: string, userId: string
     if (!head) return { outcome: "not_found" };
     if (head.id !== basedOnId) return { outcome: "stale", currentId: head.id };
     const [{ id }] = await trx("rig_revisions")
-      .insert({ ...revisionColumns(crewId, rigId, userId, revision), number: head.number + 1, based_on_id: basedOnId })
+      .insert({ ...revisionRow(crewId, rigId, userId, revision), number: head.number + 1, based_on_id: basedOnId })
       .returning("id");
     await trx("rigs").where({ crew_id: crewId, id: rigId }).update({ name: revision.name, site_id: revision.siteId });
     return { outcome: "saved", revisionId: id };

@@ -103,3 +103,9 @@ export async function deleteSite(crewId: string, id: string): Promise<SiteDeleti
     return "deleted";
   });
 }
+
+/** A site's row as the site form edits it. */
+export function siteInput(row: SiteRow): Site {
+  const { name, accessNotes, spanM, heightDifferenceM, measuredBy, uncertaintyM, ground, anchors, coordinates } = row;
+  return { name, accessNotes, spanM, heightDifferenceM, measuredBy, uncertaintyM, ground, anchors, coordinates };
+}

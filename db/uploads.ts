@@ -16,9 +16,13 @@ export interface UploadRow {
   createdAt: string;
 }
 
+/** What a photo or manual belongs to. */
+export type UploadOwner = { itemId: string } | { modelId: string } | { siteId: string };
+
 export type NewUpload = Omit<UploadRow, "id" | "createdAt" | "modelId" | "itemId"> & {
   modelId?: string | null;
   itemId?: string | null;
+  siteId?: string | null;
   analysis?: unknown;
   uploadedBy: string;
 };
@@ -48,6 +52,7 @@ export async function insertUpload(crewId: string, upload: NewUpload): Promise<U
       sha256: upload.sha256,
       model_id: upload.modelId ?? null,
       item_id: upload.itemId ?? null,
+      site_id: upload.siteId ?? null,
       analysis: upload.analysis === undefined ? null : JSON.stringify(upload.analysis),
       uploaded_by: upload.uploadedBy,
     })
@@ -65,8 +70,8 @@ export async function traceAnalysis<T>(crewId: string, id: string): Promise<T | 
   return (row?.analysis as T) ?? null;
 }
 
-export function listUploads(crewId: string, of: { itemId: string } | { modelId: string }): Promise<UploadRow[]> {
-  const where = "itemId" in of ? { item_id: of.itemId } : { model_id: of.modelId };
+export function listUploads(crewId: string, of: UploadOwner): Promise<UploadRow[]> {
+  const where = "itemId" in of ? { item_id: of.itemId } : "siteId" in of ? { site_id: of.siteId } : { model_id: of.modelId };
   return db("uploads")
     .where({ crew_id: crewId, ...where })
     .orderBy("created_at", "desc")

@@ -22,7 +22,7 @@ const ropeCurve = [
   { tensionKN: 5, elongationPct: 3.1 },
 ];
 
-const MODELS = [
+export const MODELS = [
   {
     key: "ridgeback",
     kind: "webbing",

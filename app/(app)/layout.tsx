@@ -1,4 +1,5 @@
 import { AppShell } from "@/components/app-shell";
+import { QueryProvider } from "@/components/query-provider";
 import { AccountMenu } from "@/components/account-menu";
 import { CrewSwitcher } from "@/components/crew/crew-switcher";
 import { getCurrentSession } from "@/lib/auth/session";
@@ -15,7 +16,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
       crewSwitcher={current ? <CrewSwitcher crews={memberships.map((m) => m.crew)} currentId={current.crew.id} /> : null}
       accountMenu={<AccountMenu name={signedIn.user.name} role={current?.role ?? null} />}
     >
-      {children}
+      <QueryProvider>{children}</QueryProvider>
     </AppShell>
   );
 }

@@ -7,12 +7,13 @@ import { Field } from "@/components/ui/field";
 import { useToast } from "@/components/ui/toast";
 import { callApi } from "@/components/forms/call-api";
 import { FormError } from "@/components/forms/form-error";
+import type { UploadOwner } from "@/db/uploads";
 
 const ACCEPT = { photo: "image/jpeg,image/png,image/webp", manual: "application/pdf" } as const;
 const HINT = { photo: "A JPEG, PNG or WebP image, at most 15 MiB.", manual: "A PDF, at most 30 MiB." } as const;
 
-/** Uploads a photo (of an item or a model) or a manual (of a model). */
-export function FileUploadForm({ purpose, owner }: { purpose: "photo" | "manual"; owner: { itemId: string } | { modelId: string } }) {
+/** Uploads a photo (of an item, a model or a site) or a manual (of a model). */
+export function FileUploadForm({ purpose, owner }: { purpose: "photo" | "manual"; owner: UploadOwner }) {
   const router = useRouter();
   const notify = useToast();
   const [error, setError] = useState<string | null>(null);

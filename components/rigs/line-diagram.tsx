@@ -1,19 +1,31 @@
 "use client";
 
-import { useEffect, useRef, useState } from "react";
+import { useEffect, useLayoutEffect, useRef, useState, type KeyboardEvent } from "react";
 import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
-import { formatDepth, formatDistance } from "@/lib/rig-form/format";
+import type { KonvaEventObject } from "konva/lib/Node";
+import { formatDepth, formatDistance, formatLoad } from "@/lib/rig-form/format";
 import { verticalExaggeration } from "@/lib/rig-form/exaggeration";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { RigResult } from "@/physics";
 
-const HEIGHT = 260;
-const PAD = { left: 28, right: 28, top: 56, bottom: 36 };
+const HEIGHT = 230;
+const PAD = { left: 30, right: 30, top: 60, bottom: 24 };
 // The product's ink, spruce and caution tokens (tailwind.config.ts), for a canvas that cannot read classes.
 const INK = "#111822";
 const MUTED = "#4d5d71";
 const LOADED = "#11573d";
 const ANCHOR = "#5c3d00";
+const GROUND = "#cbd3dc";
+
+/** The walker may be dragged between 1 % and 99 % of the span: at an anchor the line cannot deflect. */
+export const WALKER_RANGE = { min: 0.01, max: 0.99 } as const;
+const clampWalker = (f: number) => Math.min(WALKER_RANGE.max, Math.max(WALKER_RANGE.min, Math.round(f * 1000) / 1000));
+
+// Keys that move the walker, by how much of the span (common slider practice: arrows a small step, Page keys a large one).
+const KEY_STEPS: Record<string, number> = { ArrowLeft: -0.01, ArrowDown: -0.01, ArrowRight: 0.01, ArrowUp: 0.01, PageDown: -0.1, PageUp: 0.1 };
+
+/** Marks the start of a walker move, so the frame it causes can be measured (see tests/bench). */
+const markWalkerInput = () => performance.mark("walker-input");
 
 /** Width of the element, following it as the window changes. */
 function useWidth() {
@@ -29,34 +41,111 @@ function useWidth() {
   return { ref, width };
 }
 
-/** Side view of the line: unloaded and with the walker, anchors at both ends, heights exaggerated as stated. */
-export function LineDiagram({ result, units }: { result: RigResult; units: UnitSystem }) {
+/** After a walker move has been drawn, how long it took from the input to the next frame. */
+function useFrameMeasure(result: RigResult) {
+  useLayoutEffect(() => {
+    if (performance.getEntriesByName("walker-input", "mark").length === 0) return;
+    requestAnimationFrame(() => {
+      performance.measure("walker-frame", "walker-input");
+      performance.clearMarks("walker-input");
+    });
+  }, [result]);
+}
+
+/** The ground under the line from A to B: the given points, level beyond the ends. */
+function groundProfile(ground: { points: { xM: number; heightM: number }[] } | undefined, span: number): { x: number; y: number }[] {
+  if (!ground?.points.length) return [];
+  const points = ground.points.map((p) => ({ x: p.xM, y: p.heightM }));
+  return [{ x: 0, y: points[0].y }, ...points, { x: span, y: points[points.length - 1].y }];
+}
+
+interface LineDiagramProps {
+  result: RigResult;
+  /** The engine's input as evaluated, for the ground under the line. */
+  input: Record<string, unknown>;
+  units: UnitSystem;
+  onWalkerMove: (fraction: number) => void;
+}
+
+/**
+ * Side view of the line, unloaded and with the walker, with the tension at each anchor and the ground
+ * where the site gives it. The walker is dragged with a pointer or a finger, or moved with the keyboard.
+ */
+export function LineDiagram({ result, input, units, onWalkerMove }: LineDiagramProps) {
   const { ref, width } = useWidth();
+  const dragging = useRef(false);
+  useFrameMeasure(result);
   const { unloaded, walker } = result;
-  const all = [...unloaded.profile, ...walker.profile];
-  const span = all.reduce((m, p) => Math.max(m, p.x), 0);
-  const top = all.reduce((m, p) => Math.max(m, p.y), 0);
-  const bottom = all.reduce((m, p) => Math.min(m, p.y), 0);
-  const pixelsPerMetre = (width - PAD.left - PAD.right) / span;
+  const end = unloaded.profile[unloaded.profile.length - 1];
+  const span = end.x;
+  const ground = groundProfile(input.ground as Parameters<typeof groundProfile>[0], span);
+  const all = [...unloaded.profile, ...walker.profile, ...ground];
+  const top = Math.max(...all.map((p) => p.y), 0);
+  const bottom = Math.min(...all.map((p) => p.y), 0);
+  const pixelsPerMetre = Math.max(width - PAD.left - PAD.right, 1) / span;
   const exaggeration = verticalExaggeration(top - bottom, pixelsPerMetre, HEIGHT - PAD.top - PAD.bottom);
   const px = (x: number) => PAD.left + x * pixelsPerMetre;
   const py = (y: number) => PAD.top + (top - y) * pixelsPerMetre * exaggeration;
   const points = (profile: { x: number; y: number }[]) => profile.flatMap((p) => [px(p.x), py(p.y)]);
-  const end = unloaded.profile[unloaded.profile.length - 1];
   const walkerY = (end.y * walker.positionM) / end.x - walker.sagAtWalkerM;
+  const fraction = walker.positionM / span;
+
+  const moveTo = (pointerX: number) => {
+    markWalkerInput();
+    onWalkerMove(clampWalker((pointerX - PAD.left) / pixelsPerMetre / span));
+  };
+  const onPointer = (event: KonvaEventObject<PointerEvent>, phase: "down" | "move" | "up") => {
+    if (phase === "down") dragging.current = true;
+    if (phase === "up") dragging.current = false;
+    const pointer = event.target.getStage()?.getPointerPosition();
+    if (dragging.current && pointer) moveTo(pointer.x);
+  };
+  const onKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {
+    const step = KEY_STEPS[event.key];
+    const to = event.key === "Home" ? WALKER_RANGE.min : event.key === "End" ? WALKER_RANGE.max : step === undefined ? null : fraction + step;
+    if (to === null) return;
+    event.preventDefault();
+    markWalkerInput();
+    onWalkerMove(clampWalker(to));
+  };
+
   const description = `Side view: span ${formatDistance(span, units)}, B ${formatDistance(end.y, units)} above A. Unloaded mid-span sag ${formatDepth(
     unloaded.midSpanSagM,
     units,
-  )}; with the walker at ${formatDistance(walker.positionM, units)} the sag is ${formatDepth(walker.sagAtWalkerM, units)}. Heights drawn ×${exaggeration}.`;
+  )}; with the walker at ${formatDistance(walker.positionM, units)} the sag is ${formatDepth(walker.sagAtWalkerM, units)}, tension at A ${formatLoad(
+    walker.tensionAN,
+    units,
+  )} and at B ${formatLoad(walker.tensionBN, units)}. Heights drawn ×${exaggeration}.`;
   return (
     <figure>
-      <div ref={ref} role="img" aria-label={description} className="w-full">
+      <div
+        ref={ref}
+        role="slider"
+        tabIndex={0}
+        aria-label="Walker position on the side view"
+        aria-valuemin={WALKER_RANGE.min * 100}
+        aria-valuemax={WALKER_RANGE.max * 100}
+        aria-valuenow={Math.round(fraction * 1000) / 10}
+        aria-valuetext={`${formatDistance(walker.positionM, units)} from A. ${description}`}
+        onKeyDown={onKeyDown}
+        // Vertical swipes still scroll the page; sideways ones drag the walker.
+        style={{ touchAction: "pan-y" }}
+        className="w-full cursor-ew-resize rounded-control focus-visible:outline focus-visible:outline-4 focus-visible:outline-spruce-600"
+      >
         {width > 0 ? (
-          <Stage width={width} height={HEIGHT}>
-            <Layer>
+          <Stage
+            width={width}
+            height={HEIGHT}
+            onPointerDown={(e) => onPointer(e, "down")}
+            onPointerMove={(e) => onPointer(e, "move")}
+            onPointerUp={(e) => onPointer(e, "up")}
+            onPointerLeave={() => (dragging.current = false)}
+          >
+            <Layer listening>
+              <Rect x={0} y={0} width={width} height={HEIGHT} fill="#ffffff" />
               <Text
                 x={8}
-                y={8}
+                y={6}
                 width={width - 16}
                 wrap="word"
                 text={
@@ -68,20 +157,32 @@ export function LineDiagram({ result, units }: { result: RigResult; units: UnitS
                 fontStyle="bold"
                 fill={INK}
               />
+              {ground.length ? (
+                <Line points={[...points(ground), px(span), HEIGHT, px(0), HEIGHT]} closed fill={GROUND} stroke={MUTED} strokeWidth={1} />
+              ) : null}
               <Line points={[px(0), py(0), px(end.x), py(end.y)]} stroke={MUTED} strokeWidth={1} dash={[2, 6]} />
               <Line points={points(unloaded.profile)} stroke={MUTED} strokeWidth={2} dash={[10, 6]} />
               <Line points={points(walker.profile)} stroke={LOADED} strokeWidth={3} />
-              <Circle x={px(walker.positionM)} y={py(walkerY)} radius={7} fill={LOADED} stroke="#ffffff" strokeWidth={2} />
+              <Circle x={px(walker.positionM)} y={py(walkerY)} radius={11} fill={LOADED} stroke="#ffffff" strokeWidth={3} />
+              <Text x={px(walker.positionM) - 40} y={py(walkerY) + 16} width={80} align="center" text="Walker" fontSize={14} fontStyle="bold" fill={LOADED} />
               {[
-                { x: 0, y: 0, label: "A" },
-                { x: end.x, y: end.y, label: "B" },
+                { x: 0, y: 0, label: "A", tension: walker.tensionAN, align: "left" as const },
+                { x: end.x, y: end.y, label: "B", tension: walker.tensionBN, align: "right" as const },
               ].map((a) => (
                 <Group key={a.label}>
-                  <Rect x={px(a.x) - 7} y={py(a.y) - 7} width={14} height={14} fill={ANCHOR} />
-                  <Text x={px(a.x) - 5} y={py(a.y) + 12} text={a.label} fontSize={16} fontStyle="bold" fill={INK} />
+                  <Rect x={px(a.x) - 8} y={py(a.y) - 8} width={16} height={16} fill={ANCHOR} />
+                  <Text
+                    x={a.align === "left" ? 4 : width - 164}
+                    y={py(a.y) - 34}
+                    width={160}
+                    align={a.align}
+                    text={`${a.label}: ${formatLoad(a.tension, units)}`}
+                    fontSize={15}
+                    fontStyle="bold"
+                    fill={INK}
+                  />
                 </Group>
               ))}
-              <Text x={px(walker.positionM) + 10} y={py(walkerY) + 4} text="Walker" fontSize={14} fill={LOADED} />
             </Layer>
           </Stage>
         ) : (
@@ -97,7 +198,8 @@ export function LineDiagram({ result, units }: { result: RigResult; units: UnitS
           <span aria-hidden="true" className="mr-1 inline-block w-8 border-t-[3px] border-spruce-700 align-middle" />
           With the walker (solid)
         </span>
-        <span>Dotted: the chord A–B. Heights ×{exaggeration}.</span>
+        {ground.length ? <span>Shaded: the ground under the line.</span> : null}
+        <span>Figures at A and B: the tension with the walker where it is. Drag the walker, or focus the view and use the arrow and Page keys.</span>
       </figcaption>
     </figure>
   );

@@ -4,7 +4,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { callApi } from "@/components/forms/call-api";
 import { judgeAgreement, SAME_FIGURE, type Difference } from "@/lib/rig-form/compare-results";
-import type { Evaluation } from "./line-check";
+import type { Evaluation } from "./evaluation";
 
 type Outcome =
   | { kind: "agrees"; version: string; exact: boolean; largestRelative: number }
@@ -23,7 +23,7 @@ const MOST_DIFFERENCES_SHOWN = 8;
 export function ServerCheck({ evaluation }: { evaluation: Evaluation }) {
   const [checked, setChecked] = useState<Checked | null>(null);
   const [busy, setBusy] = useState(false);
-  const current = evaluation.kind === "figures" ? evaluation.inputJson : null;
+  const current = evaluation.kind === "figures" ? JSON.stringify(evaluation.input) : null;
   const outcome = checked && checked.input === current ? checked.outcome : null;
 
   async function check() {

@@ -23,6 +23,7 @@ function SweepPanel({
   sweep,
   units,
   offset,
+  walkerX,
 }: {
   title: string;
   kind: "force" | "length";
@@ -30,6 +31,7 @@ function SweepPanel({
   sweep: Sweep;
   units: UnitSystem;
   offset: number;
+  walkerX?: number;
 }) {
   const unit = unitLabel(kind, units);
   const span = sweep.points[sweep.points.length - 1].x;
@@ -56,6 +58,18 @@ function SweepPanel({
           {formatDistance(m, units)}
         </text>
       ))}
+      {walkerX === undefined ? null : (
+        <line
+          x1={x(walkerX)}
+          x2={x(walkerX)}
+          y1={offset + PAD.top}
+          y2={bottom}
+          strokeWidth={2}
+          strokeDasharray="3 4"
+          className="stroke-ink-500"
+          data-walker-marker
+        />
+      )}
       {series.map((s) => (
         <g key={s.label}>
           <polyline
@@ -73,7 +87,7 @@ function SweepPanel({
 }
 
 /** Anchor tensions and walker sag with the walker at every point of the sweep, worst cases marked. */
-export function SweepChart({ sweep, units }: { sweep: Sweep; units: UnitSystem }) {
+export function SweepChart({ sweep, units, walkerX }: { sweep: Sweep; units: UnitSystem; walkerX?: number }) {
   const at = (p: SweepPoint) => formatDistance(p.x, units);
   const tension: Series[] = [
     {
@@ -104,11 +118,11 @@ export function SweepChart({ sweep, units }: { sweep: Sweep; units: UnitSystem }
         <title id="sweep-chart-title">
           {`Walker at ${sweep.points.length} positions from A to B. ${tension.map((s) => s.worstText).join(". ")}. ${sag[0].worstText}.`}
         </title>
-        <SweepPanel title="Anchor tension" kind="force" series={tension} sweep={sweep} units={units} offset={0} />
-        <SweepPanel title="Walker sag below the chord" kind="length" series={sag} sweep={sweep} units={units} offset={PANEL} />
+        <SweepPanel title="Anchor tension" kind="force" series={tension} sweep={sweep} units={units} offset={0} walkerX={walkerX} />
+        <SweepPanel title="Walker sag below the chord" kind="length" series={sag} sweep={sweep} units={units} offset={PANEL} walkerX={walkerX} />
       </svg>
       <figcaption className="mt-2 space-y-1 text-sm text-ink-700">
-        <p>Across: the walker&apos;s distance from A. Red dots mark the worst case of each line:</p>
+        <p>Across: the walker&apos;s distance from A; the dashed upright is where the walker is now. Red dots mark the worst case of each line:</p>
         <ul className="list-disc pl-5 font-medium text-ink-900">
           {[...tension, ...sag].map((s) => (
             <li key={s.label}>{s.worstText}</li>

@@ -1,4 +1,4 @@
-import { forwardRef, useId, type InputHTMLAttributes, type ReactNode } from "react";
+import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type TextareaHTMLAttributes } from "react";
 import { classNames } from "@/lib/class-names";
 
 export const controlClasses =
@@ -41,6 +41,9 @@ export function describedBy(id: string, error?: string, hint?: ReactNode) {
   } as const;
 }
 
+// A box whose figure comes from elsewhere (the Kit, the site) looks it: dashed and shaded.
+const READ_ONLY = "read-only:border-dashed read-only:bg-ink-50";
+
 export interface FieldProps extends InputHTMLAttributes<HTMLInputElement> {
   label: string;
   hint?: ReactNode;
@@ -52,7 +55,30 @@ export const Field = forwardRef<HTMLInputElement, FieldProps>(function Field({ l
   const fieldId = id ?? generated;
   return (
     <FieldFrame id={fieldId} label={label} hint={hint} error={error}>
-      <input ref={ref} id={fieldId} {...describedBy(fieldId, error, hint)} className={classNames(controlClasses, className)} {...props} />
+      <input ref={ref} id={fieldId} {...describedBy(fieldId, error, hint)} className={classNames(controlClasses, READ_ONLY, className)} {...props} />
+    </FieldFrame>
+  );
+});
+
+export interface TextAreaProps extends TextareaHTMLAttributes<HTMLTextAreaElement> {
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+}
+
+export const TextArea = forwardRef<HTMLTextAreaElement, TextAreaProps>(function TextArea({ label, hint, error, id, className, rows = 3, ...props }, ref) {
+  const generated = useId();
+  const fieldId = id ?? generated;
+  return (
+    <FieldFrame id={fieldId} label={label} hint={hint} error={error}>
+      <textarea
+        ref={ref}
+        id={fieldId}
+        rows={rows}
+        {...describedBy(fieldId, error, hint)}
+        className={classNames(controlClasses, "py-2", className)}
+        {...props}
+      />
     </FieldFrame>
   );
 });

@@ -5,6 +5,7 @@ import { FieldFrame, controlClasses, describedBy } from "./field";
 export interface SelectOption {
   value: string;
   label: string;
+  disabled?: boolean;
 }
 
 export interface SelectProps extends SelectHTMLAttributes<HTMLSelectElement> {
@@ -22,7 +23,7 @@ export const Select = forwardRef<HTMLSelectElement, SelectProps>(function Select
     <FieldFrame id={fieldId} label={label} hint={hint} error={error}>
       <select ref={ref} id={fieldId} {...describedBy(fieldId, error, hint)} className={classNames(controlClasses, "pr-8", className)} {...props}>
         {options.map((o) => (
-          <option key={o.value} value={o.value}>
+          <option key={o.value} value={o.value} disabled={o.disabled}>
             {o.label}
           </option>
         ))}

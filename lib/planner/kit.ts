@@ -116,6 +116,7 @@ export const isBenchResult = (result: Record<string, unknown>) => typeof result.
  */
 export function prepareRigInput(values: unknown, catalogue: KitCatalogue, site: SiteSnapshot | null) {
   const input = structuredClone((values ?? {}) as Input);
+  delete input.siteId;
   const problems: GearProblem[] = [];
   const gear: SnapshotGear[] = [];
   const typed: { field: string; name: string }[] = [];
@@ -203,11 +204,15 @@ export function prepareRigInput(values: unknown, catalogue: KitCatalogue, site: 
 
 export type PreparedRig = ReturnType<typeof prepareRigInput>;
 
-/** The planner's editable values from a saved input: the Kit's slip results are left out, as the next preparation brings them again. */
-export function editableValues(inputs: Record<string, unknown>): Record<string, unknown> {
-  const values = structuredClone(inputs) as Input;
+/**
+ * The planner's editable values from a saved revision: its inputs with the site it stood on; the Kit's
+ * slip results and the site's ground are left out, as the next preparation brings them again.
+ */
+export function plannerValues(revision: { inputs: Record<string, unknown>; snapshot: RevisionSnapshot }): Record<string, unknown> {
+  const values = structuredClone(revision.inputs) as Input;
   values.slipBench = (values.slipBench ?? []).filter((r) => !isBenchResult(r));
-  return values;
+  if (revision.snapshot.site) delete values.ground;
+  return { ...values, siteId: revision.snapshot.site?.id ?? null };
 }
 
 /** The Kit models a revision used whose figures have changed since it was saved (or that are gone), by field. */
@@ -225,4 +230,21 @@ export function kitChangesSince(snapshot: RevisionSnapshot, catalogue: KitCatalo
     if (now.retiredOn) return [{ field: g.field, name: g.name, change: "retired" }];
     return JSON.stringify(now.specs) === JSON.stringify(g.specs) ? [] : [{ field: g.field, name: g.name, change: "changed" }];
   });
+}
+
+/**
+ * The Kit and site exactly as a revision recorded them: preparing the revision's values against this
+ * gives back the very input it saved, whatever has changed in the Kit since (for reading a revision).
+ */
+export function recordedCatalogue(revision: { inputs: Record<string, unknown>; snapshot: RevisionSnapshot }): KitCatalogue {
+  const brake = revision.snapshot.gear.find((g) => g.field === "brake.modelId");
+  const bench = ((revision.inputs.slipBench ?? []) as Record<string, unknown>[]).filter(isBenchResult).map((r) => ({
+    id: String(r.testId),
+    deviceId: brake?.modelId ?? "",
+    ropeDiameterMm: Number(r.ropeDiameterMm),
+    result: r.result as KitBenchTest["result"],
+    forceN: Number(r.forceN),
+  }));
+  const models = revision.snapshot.gear.map((g) => ({ id: g.modelId, kind: g.kind, name: g.name, specs: g.specs, retiredOn: null }));
+  return { models: [...new Map(models.map((m) => [m.id, m])).values()], bench };
 }

@@ -4,6 +4,11 @@ import { RequestError } from "@/lib/http-errors";
 import { kindOf, labelOf } from "./fields";
 import type { GearProblem } from "./kit";
 
+/** The sentence beside a field when what is wrong is best said by what is allowed there. */
+export function allowedSentence(allowed: string): string {
+  return `Allowed: ${allowed.replace(/\.$/, "")}.`;
+}
+
 /** What the engine refused, in the form's words and the crew's units: the field, what is allowed there, and one sentence. */
 export function rigInputProblem(error: RigInputError, units: UnitSystem): { field: string; allowed: string; sentence: string } {
   const kind = kindOf(error.field);
@@ -18,7 +23,7 @@ export function rigInputProblem(error: RigInputError, units: UnitSystem): { fiel
 /** A 400 for an input the engine refused, naming the field as the form labels it. */
 export function rigInputRefusal(error: RigInputError, units: UnitSystem): RequestError {
   const problem = rigInputProblem(error, units);
-  return new RequestError(400, `This rig cannot be saved. ${problem.sentence}`, { [problem.field]: problem.allowed });
+  return new RequestError(400, `This rig cannot be saved. ${problem.sentence}`, { [problem.field]: allowedSentence(problem.allowed) });
 }
 
 /** A 400 for gear picks the Kit cannot honour, each on its field. */

@@ -12,6 +12,19 @@ export const REVISION_STATE_LABELS: Record<RevisionState, string> = {
   superseded: "Superseded",
 };
 
+/** A revision as lists show it. */
+export interface RevisionMeta {
+  id: string;
+  number: number;
+  state: RevisionState;
+  basedOnId: string | null;
+  engineVersion: string;
+  spanM: number;
+  mainlineName: string;
+  authorName: string | null;
+  createdAt: string;
+}
+
 const rigName = z.string({ error: "Name the rig." }).trim().min(1, "Name the rig.").max(120, "Rig name: at most 120 characters.");
 const inputs = z.record(z.string(), z.unknown(), { error: "The rig's inputs are missing." });
 const siteId = z.uuid({ error: "Site: choose one of the crew's sites, or none." }).nullable();

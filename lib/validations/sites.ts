@@ -101,16 +101,23 @@ export const SiteSchema = z
     uncertaintyM: metres("Uncertainty").refine((v) => v >= 0 && v <= 100, "Uncertainty: from 0 m to 100 m."),
     ground: SiteGroundSchema,
     anchors: z.object({ a: SiteAnchorSchema, b: SiteAnchorSchema }),
-    coordinates: z
-      .object({
-        latitude: z.number({ error: "Latitude: enter a number of degrees." }).min(-90, "Latitude: from -90° to 90°.").max(90, "Latitude: from -90° to 90°."),
-        longitude: z
-          .number({ error: "Longitude: enter a number of degrees." })
-          .min(-180, "Longitude: from -180° to 180°.")
-          .max(180, "Longitude: from -180° to 180°."),
-      })
-      .nullable()
-      .default(null),
+    // Both coordinates left blank is no coordinates.
+    coordinates: z.preprocess(
+      (v) =>
+        v && typeof v === "object" && (v as Record<string, unknown>).latitude === undefined && (v as Record<string, unknown>).longitude === undefined
+          ? null
+          : v,
+      z
+        .object({
+          latitude: z.number({ error: "Latitude: enter a number of degrees." }).min(-90, "Latitude: from -90° to 90°.").max(90, "Latitude: from -90° to 90°."),
+          longitude: z
+            .number({ error: "Longitude: enter a number of degrees." })
+            .min(-180, "Longitude: from -180° to 180°.")
+            .max(180, "Longitude: from -180° to 180°."),
+        })
+        .nullable()
+        .default(null),
+    ),
   })
   .superRefine((site, ctx) => {
     if (Math.abs(site.heightDifferenceM) > site.spanM) {

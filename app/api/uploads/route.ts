@@ -5,9 +5,10 @@ import { putObject } from "@/lib/storage";
 import { checkFileType, randomStorageKey, readUploadForm, sha256Hex } from "@/lib/uploads";
 import { findItem, findModel } from "@/db/kit";
 import { insertUpload } from "@/db/uploads";
+import { findSite } from "@/db/sites";
 import { isUuid } from "@/lib/validations/ids";
 
-/** Photos of an item or a model, and manuals (PDF) of a model. Traces go through the slip bench. */
+/** Photos of an item, a model or a site, and manuals (PDF) of a model. Traces go through the slip bench. */
 export const POST = crewRoute("kit.write", async ({ crew, user }, request) => {
   const purposeField = request.nextUrl.searchParams.get("purpose");
   if (purposeField !== "photo" && purposeField !== "manual") {
@@ -15,14 +16,15 @@ export const POST = crewRoute("kit.write", async ({ crew, user }, request) => {
   }
   const purpose = purposeField;
   const { form, file, bytes } = await readUploadForm(request, purpose);
-  const itemId = form.get("itemId");
-  const modelId = form.get("modelId");
+  const [itemId, modelId, siteId] = ["itemId", "modelId", "siteId"].map((key) => form.get(key));
   const owner =
     typeof itemId === "string" && itemId !== ""
       ? { itemId: isUuid(itemId) && (await findItem(crew.id, itemId)) ? itemId : null }
-      : { modelId: isUuid(modelId) && (await findModel(crew.id, modelId)) ? modelId : null };
-  if (!owner.itemId && !owner.modelId) throw new RequestError(404, "Attach the file to an item or a gear model of this crew (itemId or modelId).");
-  if (purpose === "manual" && owner.itemId) throw new RequestError(400, "Manuals belong to a gear model, not to one item: send modelId.");
+      : typeof siteId === "string" && siteId !== ""
+        ? { siteId: isUuid(siteId) && (await findSite(crew.id, siteId)) ? siteId : null }
+        : { modelId: isUuid(modelId) && (await findModel(crew.id, modelId)) ? modelId : null };
+  if (!Object.values(owner)[0]) throw new RequestError(404, "Attach the file to an item, a gear model or a site of this crew (itemId, modelId or siteId).");
+  if (purpose === "manual" && !("modelId" in owner)) throw new RequestError(400, "Manuals belong to a gear model: send modelId.");
   const contentType = checkFileType(purpose, file.name, bytes);
   const sha256 = sha256Hex(bytes);
   const storageKey = randomStorageKey();

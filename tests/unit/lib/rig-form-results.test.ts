@@ -38,11 +38,13 @@ describe("the starting rig", () => {
 });
 
 describe("vertical exaggeration of the side view", () => {
-  it("picks the largest of 1, 2, 5 × 10^k that fits, never less than true scale", () => {
+  it("picks the largest of 1, 2, 5 × 10^k that fits, exaggerating a shallow sag and compressing a deep gorge", () => {
     // 120 m span on 600 px: 5 px/m; a 6 m drop in 180 px fits ×6 → ×5.
     expect(verticalExaggeration(6, 5, 180)).toBe(5);
     expect(verticalExaggeration(0.5, 5, 180)).toBe(50);
-    expect(verticalExaggeration(100, 5, 180)).toBe(1);
+    expect(verticalExaggeration(36, 5, 180)).toBe(1);
+    // A deep gorge under the line is compressed to fit: 180 px / (100 m × 5 px/m) = 0.36 → 0.2.
+    expect(verticalExaggeration(100, 5, 180)).toBe(0.2);
     expect(verticalExaggeration(0, 5, 180)).toBe(1);
   });
 });

@@ -1,20 +1,13 @@
 "use client";
 
 import type { ReactNode } from "react";
-import dynamic from "next/dynamic";
 import { formatCapacity, formatDepth, formatDistance, formatLoad, truncateRatio } from "@/lib/rig-form/format";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { RigResult, SafetyFactor } from "@/physics";
-import type { Evaluation } from "./line-check";
 import { Table } from "@/components/ui/table";
 import { SweepChart } from "./sweep-chart";
-import { Verdict, type VerdictTone } from "./verdict";
-
-// Konva draws on a canvas and needs the browser: never rendered on the server.
-const LineDiagram = dynamic(() => import("./line-diagram").then((m) => m.LineDiagram), {
-  ssr: false,
-  loading: () => <div className="h-64 animate-pulse rounded-panel bg-ink-100" aria-hidden="true" />,
-});
+import { Verdict } from "./verdict";
+import { BRAKE_VERDICTS } from "./verdict-words";
 
 function Panel({ title, children, id }: { title: string; children: ReactNode; id?: string }) {
   return (
@@ -40,12 +33,6 @@ function Figures({ rows }: { rows: [string, ReactNode][] }) {
     </dl>
   );
 }
-
-const BRAKE_VERDICTS: Record<RigResult["brake"]["verdict"], { tone: VerdictTone; word: string }> = {
-  holds: { tone: "ok", word: "Holds" },
-  slips: { tone: "danger", word: "Slips" },
-  untested: { tone: "caution", word: "Untested for this rope" },
-};
 
 const where = (f: SafetyFactor) => (f.location === "line" ? "Line" : `Anchor ${f.location.toUpperCase()}`);
 
@@ -152,29 +139,35 @@ function RigFigures({ result, units }: { result: RigResult; units: UnitSystem })
   );
 }
 
-function ResultsBody({ result, units }: { result: RigResult; units: UnitSystem }) {
+/** Every figure of the rig below the headline: walker, leash fall, tensioning, brake, anchors, the sweep, safety factors, warnings and cautions. */
+export function RigDetails({ result, units, gearProblems }: { result: RigResult; units: UnitSystem; gearProblems: readonly { message: string }[] }) {
+  const warnings = [...gearProblems.map((p) => p.message), ...result.warnings];
   return (
-    <>
-      <RigFigures result={result} units={units} />
-      <Panel title="Side view" id="side-view">
-        <LineDiagram result={result} units={units} />
-      </Panel>
-      <Panel title="Walker along the line" id="sweep-chart">
-        <SweepChart sweep={result.sweep} units={units} />
-      </Panel>
-      <Panel title="Safety factors" id="safety-factors">
-        <SafetyFactorTable factors={result.safetyFactors} units={units} />
-      </Panel>
+    <div className="space-y-6">
+      <p role="status" className="rounded-control bg-info-100 p-3 text-info-700">
+        Figures for the inputs as they are now, computed in your browser by engine {result.engineVersion}
+        {result.extrapolated ? "; some tensions are beyond the last measured stretch point" : ""}. Loads and sags are rounded up; safety factors, margins and
+        capacities are cut down, never rounded up. A saved revision keeps the server&apos;s figures, the ones of record.
+      </p>
       <Panel title="Warnings" id="warnings">
-        {result.warnings.length === 0 ? (
+        {warnings.length === 0 ? (
           <p>No warnings from the engine for this rig.</p>
         ) : (
           <ul className="list-disc space-y-1 pl-5 text-danger-700">
-            {result.warnings.map((w) => (
+            {warnings.map((w) => (
               <li key={w}>{w}</li>
             ))}
           </ul>
         )}
+      </Panel>
+      <div className="grid gap-6 xl:grid-cols-2">
+        <RigFigures result={result} units={units} />
+      </div>
+      <Panel title="Walker along the line" id="sweep-chart">
+        <SweepChart sweep={result.sweep} units={units} walkerX={result.walker.positionM} />
+      </Panel>
+      <Panel title="Safety factors" id="safety-factors">
+        <SafetyFactorTable factors={result.safetyFactors} units={units} />
       </Panel>
       <Panel title="Cautions" id="engine-cautions">
         <ul className="list-disc space-y-1 pl-5">
@@ -183,35 +176,6 @@ function ResultsBody({ result, units }: { result: RigResult; units: UnitSystem }
           ))}
         </ul>
       </Panel>
-    </>
-  );
-}
-
-/** The engine's figures for the current input, or plainly why there are none. */
-export function LineResults({ evaluation, units, stale }: { evaluation: Evaluation; units: UnitSystem; stale: boolean }) {
-  if (evaluation.kind !== "figures") {
-    return (
-      <section role="status" aria-labelledby="no-figures" className="rounded-panel border-2 border-danger-600 bg-danger-100 p-4 text-danger-700">
-        <h2 id="no-figures" className="text-lg text-danger-700">
-          No figures for this input
-        </h2>
-        <p className="mt-1">
-          {evaluation.kind === "input"
-            ? "Fix the field marked in the form; until then no figures are shown, so none from an earlier input can be mistaken for these."
-            : "The engine could not solve this rig and gives no figures rather than unsure ones."}
-        </p>
-        <p className="mt-2 font-mono text-sm">{evaluation.message}</p>
-      </section>
-    );
-  }
-  return (
-    <div className={stale ? "space-y-6 opacity-60" : "space-y-6"} aria-busy={stale}>
-      <p role="status" className="rounded-control bg-info-100 p-3 text-info-700">
-        Figures for the inputs as they are now, computed in your browser by engine {evaluation.result.engineVersion}
-        {evaluation.result.extrapolated ? "; some tensions are beyond the last measured stretch point" : ""}. Loads and sags are rounded up; safety factors,
-        margins and capacities are cut down, never rounded up.
-      </p>
-      <ResultsBody result={evaluation.result} units={units} />
     </div>
   );
 }

@@ -1,0 +1,23 @@
+import type { Metadata } from "next";
+import { PageHeader } from "@/components/page-header";
+import { SiteForm } from "@/components/sites/site-form";
+import { authorizePage } from "@/lib/authz";
+import { crewRowOrNotFound } from "@/lib/validations/ids";
+import { findSite, siteInput } from "@/db/sites";
+
+export const metadata: Metadata = { title: "Edit a site" };
+
+export default async function EditSitePage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const { crew } = await authorizePage("site.write", `/sites/${id}/edit`);
+  const values = siteInput(await crewRowOrNotFound(findSite, crew.id, id));
+  return (
+    <>
+      <PageHeader
+        title={`Edit ${values.name}`}
+        lead="Saved rigs keep the span and ground they were planned on; new revisions use the site as it is saved here."
+      />
+      <SiteForm units={crew.units} site={{ id, values }} />
+    </>
+  );
+}
