@@ -3,7 +3,13 @@ import { fileURLToPath } from "node:url";
 
 // Unit and integration suites run as separate projects so `npm test` can report each.
 export default defineConfig({
-  resolve: { alias: { "@": fileURLToPath(new URL(".", import.meta.url)) } },
+  resolve: {
+    alias: {
+      "@": fileURLToPath(new URL(".", import.meta.url)),
+      // The suites run on the server side: server-only's marker resolves to its empty module, as under Next's server build.
+      "server-only": fileURLToPath(new URL("node_modules/server-only/empty.js", import.meta.url)),
+    },
+  },
   test: {
     projects: [
       { extends: true, test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" } },

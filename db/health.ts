@@ -1,3 +1,4 @@
+import "server-only";
 import { db } from "./knex";
 
 export interface DatabaseHealth {

@@ -1,3 +1,4 @@
+import "server-only";
 import { db } from "./knex";
 import type { Role } from "@/lib/roles";
 import { INVITATION_DAYS, invitationProblem, type InvitationProblem } from "@/lib/invitation-state";

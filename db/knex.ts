@@ -1,3 +1,4 @@
+import "server-only";
 import knex, { type Knex } from "knex";
 import { databaseUrl } from "./config";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Knex } from "knex";
 import { db } from "./knex";
 import { setPasswordHash } from "./users";

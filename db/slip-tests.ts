@@ -1,3 +1,4 @@
+import "server-only";
 import crypto from "node:crypto";
 import { db } from "./knex";
 import type { SlipTest } from "@/lib/validations/slip-tests";

@@ -1,3 +1,4 @@
+import "server-only";
 import { db } from "./knex";
 import type { UploadPurpose } from "@/lib/uploads";
 

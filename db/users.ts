@@ -1,3 +1,4 @@
+import "server-only";
 import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { db } from "./knex";

@@ -1,3 +1,4 @@
+import "server-only";
 import { GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 
 // File bytes live in S3; the bucket, endpoint and keys come from the environment, so the local fake

@@ -15,4 +15,6 @@ fi
 
 script="$1"
 shift
-exec node_modules/.bin/tsx "scripts/$script.ts" "$@"
+# The scripts run server code (the seeds store files through lib/storage): the react-server condition
+# resolves server-only's marker to its empty module, as Next's server build does.
+exec node_modules/.bin/tsx --conditions=react-server "scripts/$script.ts" "$@"
