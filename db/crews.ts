@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "./knex";
+import { isUuid } from "@/lib/validations/ids";
 import type { Role } from "@/lib/roles";
 
 export interface Crew {
@@ -25,7 +26,7 @@ export async function membershipsOf(userId: string): Promise<Membership[]> {
 }
 
 export async function membershipIn(userId: string, crewId: string): Promise<Membership | null> {
-  if (!/^[0-9a-f-]{36}$/i.test(crewId)) return null;
+  if (!isUuid(crewId)) return null;
   const row = await db("crew_members")
     .join("crews", "crews.id", "crew_members.crew_id")
     .where({ "crew_members.user_id": userId, "crew_members.crew_id": crewId })

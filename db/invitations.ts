@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "./knex";
+import { isUuid } from "@/lib/validations/ids";
 import type { Role } from "@/lib/roles";
 import { INVITATION_DAYS, invitationProblem, type InvitationProblem } from "@/lib/invitation-state";
 
@@ -54,7 +55,7 @@ export function openInvitationsOf(crewId: string): Promise<Invitation[]> {
 }
 
 export async function revokeInvitation(crewId: string, id: string): Promise<boolean> {
-  if (!/^[0-9a-f-]{36}$/i.test(id)) return false;
+  if (!isUuid(id)) return false;
   return (await db("invitations").where({ crew_id: crewId, id }).whereNull("accepted_at").whereNull("revoked_at").update({ revoked_at: db.fn.now() })) > 0;
 }
 

@@ -1,5 +1,4 @@
 import "server-only";
-import crypto from "node:crypto";
 import { db } from "./knex";
 import type { SlipTest } from "@/lib/validations/slip-tests";
 import { toSlipResults, type SlipTableTest } from "@/lib/slip-table";
@@ -98,16 +97,12 @@ export async function insertSlipTest(crewId: string, test: NewSlipTest): Promise
   return (await findSlipTest(crewId, id))!;
 }
 
-const tokenHash = (token: string) => crypto.createHash("sha256").update(token).digest("hex");
-
-/** Publishes a new read-only link to the crew's slip table, revoking any earlier one; returns the token, shown once. */
-export async function publishSlipTable(crewId: string, userId: string): Promise<string> {
-  const token = crypto.randomBytes(24).toString("base64url");
+/** Publishes a new read-only link to the crew's slip table by its token's hash, revoking any earlier link. */
+export async function publishSlipTable(crewId: string, userId: string, tokenHash: string): Promise<void> {
   await db.transaction(async (trx) => {
     await trx("slip_table_links").where({ crew_id: crewId }).whereNull("revoked_at").update({ revoked_at: trx.fn.now() });
-    await trx("slip_table_links").insert({ crew_id: crewId, token_sha256: tokenHash(token), created_by: userId });
+    await trx("slip_table_links").insert({ crew_id: crewId, token_sha256: tokenHash, created_by: userId });
   });
-  return token;
 }
 
 export async function revokeSlipTable(crewId: string): Promise<number> {
@@ -123,11 +118,11 @@ export async function slipTableLinkOf(crewId: string): Promise<{ createdAt: stri
   return row ?? null;
 }
 
-/** The crew behind a live link, or null for an unknown or revoked token. */
-export async function crewOfSlipTableToken(token: string): Promise<{ id: string; name: string } | null> {
+/** The crew behind a live link, by its token's hash; null for an unknown or revoked one. */
+export async function crewOfSlipTableLink(tokenHash: string): Promise<{ id: string; name: string } | null> {
   const row = await db("slip_table_links")
     .join("crews", "crews.id", "slip_table_links.crew_id")
-    .where({ "slip_table_links.token_sha256": tokenHash(token) })
+    .where({ "slip_table_links.token_sha256": tokenHash })
     .whereNull("slip_table_links.revoked_at")
     .first("crews.id", "crews.name");
   return row ?? null;

@@ -1,11 +1,17 @@
 import crypto from "node:crypto";
+import { sha256Hex } from "./sha256";
 
-// Tokens sent by e-mail: 32 random bytes for the link, only their SHA-256 kept in the database.
+// Secrets sent in links or kept in cookies. Only their SHA-256 is stored or shown: whoever reads the
+// database or a page cannot use it to sign in, reset a password or open a shared table.
+
+/** A new link secret: 32 random bytes, base64url, and the hash the database keeps. */
 export function newToken(): { token: string; tokenHash: string } {
   const token = crypto.randomBytes(32).toString("base64url");
   return { token, tokenHash: hashToken(token) };
 }
 
-export function hashToken(token: string): string {
-  return crypto.createHash("sha256").update(token).digest("hex");
-}
+/** The stored form of a link secret. */
+export const hashToken = (token: string): string => sha256Hex(token);
+
+/** The public name of a session, matching the database's encode(sha256(id), 'hex'): the id itself is the cookie's secret. */
+export const sessionHandle = (sessionId: string): string => sha256Hex(sessionId);

@@ -113,7 +113,5 @@ export async function readUploadForm(request: Request, purpose: UploadPurpose): 
   return { form, file, bytes: new Uint8Array(await file.arrayBuffer()) };
 }
 
-export const sha256Hex = (bytes: Uint8Array) => crypto.createHash("sha256").update(bytes).digest("hex");
-
 /** A storage key that says nothing about the crew or the file and cannot be guessed. */
 export const randomStorageKey = () => `uploads/${crypto.randomBytes(24).toString("hex")}`;

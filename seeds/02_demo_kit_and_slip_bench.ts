@@ -4,7 +4,8 @@ import { DEMO_CREW_NAME } from "./01_demo_crew";
 import { analyseTrace } from "../lib/trace-analysis";
 import { parseTraceCsv } from "../lib/trace-csv";
 import { putObject } from "../lib/storage";
-import { randomStorageKey, sha256Hex } from "../lib/uploads";
+import { randomStorageKey } from "../lib/uploads";
+import { sha256Hex } from "../lib/sha256";
 
 // Invented gear for the demo crew (no real makers or models) and invented slip tests, three with
 // synthetic load-cell traces. Every number here is made up for the demo.

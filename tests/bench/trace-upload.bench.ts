@@ -5,7 +5,8 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { analyseTrace } from "../../lib/trace-analysis";
 import { parseTraceCsv } from "../../lib/trace-csv";
-import { checkFileType, sha256Hex } from "../../lib/uploads";
+import { checkFileType } from "../../lib/uploads";
+import { sha256Hex } from "../../lib/sha256";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "../../seeds/01_demo_crew";
 import type { Benchmark } from "./benchmark";
 

@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { AppClient } from "./support/http";
 import { createPerson, testDb } from "./support/fixtures";
-import { sessionHandle } from "@/lib/session-handle";
+import { sessionHandle } from "@/lib/tokens";
 
 afterAll(() => testDb.destroy());
 

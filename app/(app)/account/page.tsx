@@ -3,7 +3,7 @@ import { PageHeader } from "@/components/page-header";
 import { PasswordForm, ProfileForm } from "@/components/account/account-forms";
 import { SessionsList } from "@/components/account/sessions-list";
 import { requireSignedIn } from "@/lib/auth/require-signed-in";
-import { sessionHandle } from "@/lib/session-handle";
+import { sessionHandle } from "@/lib/tokens";
 import { sessionsOf } from "@/db/users";
 
 export const metadata: Metadata = { title: "Account" };

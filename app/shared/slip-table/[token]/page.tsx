@@ -4,14 +4,15 @@ import { CautionNotice } from "@/components/caution-notice";
 import { SlipLoadChart } from "@/components/charts/slip-load-chart";
 import { SlipTableMatrix } from "@/components/slip-bench/slip-table-matrix";
 import { buildSlipTable } from "@/lib/slip-table";
-import { crewOfSlipTableToken, listSlipTests } from "@/db/slip-tests";
+import { hashToken } from "@/lib/tokens";
+import { crewOfSlipTableLink, listSlipTests } from "@/db/slip-tests";
 
 export const metadata: Metadata = { title: "Shared slip table", robots: { index: false, follow: false } };
 
 // Read-only and public: the slip table and its chart, and nothing else of the crew (no people, notes or traces).
 export default async function SharedSlipTablePage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  const crew = /^[\w-]{20,64}$/.test(token) ? await crewOfSlipTableToken(token) : null;
+  const crew = /^[\w-]{20,64}$/.test(token) ? await crewOfSlipTableLink(hashToken(token)) : null;
   if (!crew) notFound();
   const tests = (await listSlipTests(crew.id)).map(({ id, deviceId, deviceName, ropeDiameterMm, result, forceN }) => ({
     id,
