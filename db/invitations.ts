@@ -59,8 +59,8 @@ export async function revokeInvitation(crewId: string, id: string): Promise<bool
   return (await db("invitations").where({ crew_id: crewId, id }).whereNull("accepted_at").whereNull("revoked_at").update({ revoked_at: db.fn.now() })) > 0;
 }
 
-export function invitationByTokenHash(tokenHash: string): Promise<Invitation | undefined> {
-  return withCrew().where("invitations.token_hash", tokenHash).first(columns);
+export async function invitationByTokenHash(tokenHash: string): Promise<Invitation | null> {
+  return (await withCrew().where("invitations.token_hash", tokenHash).first(columns)) ?? null;
 }
 
 export type AcceptOutcome = "joined" | InvitationProblem | "wrong_email";
@@ -69,7 +69,7 @@ export type AcceptOutcome = "joined" | InvitationProblem | "wrong_email";
 export async function acceptInvitation(tokenHash: string, user: { id: string; email: string }): Promise<{ outcome: AcceptOutcome; crewId?: string }> {
   return db.transaction(async (trx) => {
     const row = await trx("invitations").where({ token_hash: tokenHash }).forUpdate().first();
-    const problem = invitationProblem(row && { revokedAt: row.revoked_at, acceptedAt: row.accepted_at, expiresAt: new Date(row.expires_at) });
+    const problem = invitationProblem(row ? { revokedAt: row.revoked_at, acceptedAt: row.accepted_at, expiresAt: new Date(row.expires_at) } : null);
     if (problem) return { outcome: problem };
     if (row.email !== user.email.toLowerCase()) return { outcome: "wrong_email" };
     await trx("crew_members").insert({ crew_id: row.crew_id, user_id: user.id, role: row.role }).onConflict(["crew_id", "user_id"]).merge({ role: row.role });

@@ -10,12 +10,12 @@ export interface UserRow {
   password_hash: string;
 }
 
-export function findUserByEmail(email: string): Promise<UserRow | undefined> {
-  return db<UserRow>("users").where({ email: email.toLowerCase() }).first();
+export async function findUserByEmail(email: string): Promise<UserRow | null> {
+  return (await db<UserRow>("users").where({ email: email.toLowerCase() }).first()) ?? null;
 }
 
-export function findUserById(id: string): Promise<UserRow | undefined> {
-  return db<UserRow>("users").where({ id }).first();
+export async function findUserById(id: string): Promise<UserRow | null> {
+  return (await db<UserRow>("users").where({ id }).first()) ?? null;
 }
 
 /** Creates the person; null when the e-mail is already taken. */

@@ -9,7 +9,7 @@ export interface InvitationDates {
   expiresAt: Date;
 }
 
-export function invitationProblem(invitation: InvitationDates | undefined, now = new Date()): InvitationProblem | null {
+export function invitationProblem(invitation: InvitationDates | null, now = new Date()): InvitationProblem | null {
   if (!invitation) return "unknown";
   if (invitation.revokedAt) return "revoked";
   if (invitation.acceptedAt) return "used";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { changePasswordSchema, profileSchema } from "@/lib/validations/account";
+import { ChangePasswordSchema, ProfileSchema } from "@/lib/validations/account";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { FormError } from "@/components/forms/form-error";
 import { Field } from "@/components/ui/field";
@@ -12,7 +12,7 @@ import { useToast } from "@/components/ui/toast";
 export function ProfileForm({ name, email }: { name: string; email: string }) {
   const router = useRouter();
   const notify = useToast();
-  const { form, submit, formError } = useApiForm(profileSchema, {
+  const { form, submit, formError } = useApiForm(ProfileSchema, {
     url: "/api/account",
     method: "PATCH",
     defaultValues: { name, email },
@@ -35,7 +35,7 @@ export function ProfileForm({ name, email }: { name: string; email: string }) {
 
 export function PasswordForm() {
   const notify = useToast();
-  const { form, submit, formError } = useApiForm(changePasswordSchema, {
+  const { form, submit, formError } = useApiForm(ChangePasswordSchema, {
     url: "/api/account/password",
     defaultValues: { currentPassword: "", newPassword: "" },
     onSuccess: () => {

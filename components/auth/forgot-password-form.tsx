@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { forgotPasswordSchema } from "@/lib/validations/account";
+import { ForgotPasswordSchema } from "@/lib/validations/account";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { FormError } from "@/components/forms/form-error";
 import { Field } from "@/components/ui/field";
@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/button";
 
 export function ForgotPasswordForm() {
   const [sent, setSent] = useState<string | null>(null);
-  const { form, submit, formError } = useApiForm(forgotPasswordSchema, {
+  const { form, submit, formError } = useApiForm(ForgotPasswordSchema, {
     url: "/api/auth/forgot-password",
     onSuccess: (body) => setSent(String(body.message)),
   });

@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { useState } from "react";
-import { resetPasswordSchema } from "@/lib/validations/account";
+import { ResetPasswordSchema } from "@/lib/validations/account";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { FormError } from "@/components/forms/form-error";
 import { NewPasswordField } from "@/components/auth/new-password-field";
@@ -10,7 +10,7 @@ import { Button } from "@/components/ui/button";
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const [done, setDone] = useState<string | null>(null);
-  const { form, submit, formError } = useApiForm(resetPasswordSchema, {
+  const { form, submit, formError } = useApiForm(ResetPasswordSchema, {
     url: "/api/auth/reset-password",
     defaultValues: { token, password: "" },
     onSuccess: (body) => setDone(String(body.message)),

@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { signInSchema } from "@/lib/validations/account";
+import { SignInSchema } from "@/lib/validations/account";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { useGoTo } from "@/components/forms/use-go-to";
 import { FormError } from "@/components/forms/form-error";
@@ -10,7 +10,7 @@ import { Button } from "@/components/ui/button";
 
 export function SignInForm({ next }: { next: string }) {
   const goTo = useGoTo(next);
-  const { form, submit, formError } = useApiForm(signInSchema, {
+  const { form, submit, formError } = useApiForm(SignInSchema, {
     url: "/api/auth/sign-in",
     onSuccess: goTo,
   });

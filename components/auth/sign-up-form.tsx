@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { signUpSchema } from "@/lib/validations/account";
+import { SignUpSchema } from "@/lib/validations/account";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { useGoTo } from "@/components/forms/use-go-to";
 import { FormError } from "@/components/forms/form-error";
@@ -11,7 +11,7 @@ import { Button } from "@/components/ui/button";
 
 export function SignUpForm({ next }: { next: string }) {
   const goTo = useGoTo(next);
-  const { form, submit, formError } = useApiForm(signUpSchema, {
+  const { form, submit, formError } = useApiForm(SignUpSchema, {
     url: "/api/auth/sign-up",
     onSuccess: goTo,
   });

@@ -1,6 +1,6 @@
 "use client";
 
-import { createCrewSchema } from "@/lib/validations/crew";
+import { CreateCrewSchema } from "@/lib/validations/crew";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { useGoTo } from "@/components/forms/use-go-to";
 import { FormError } from "@/components/forms/form-error";
@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/button";
 
 export function CreateCrewForm() {
   const goTo = useGoTo("/crew");
-  const { form, submit, formError } = useApiForm(createCrewSchema, {
+  const { form, submit, formError } = useApiForm(CreateCrewSchema, {
     url: "/api/crews",
     onSuccess: goTo,
   });

@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { ROLES } from "@/lib/roles";
-import { inviteSchema } from "@/lib/validations/crew";
+import { InviteSchema } from "@/lib/validations/crew";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { FormError } from "@/components/forms/form-error";
 import { Field } from "@/components/ui/field";
@@ -13,7 +13,7 @@ import { useToast } from "@/components/ui/toast";
 export function InviteForm() {
   const router = useRouter();
   const notify = useToast();
-  const { form, submit, formError } = useApiForm(inviteSchema, {
+  const { form, submit, formError } = useApiForm(InviteSchema, {
     url: "/api/crew/invitations",
     defaultValues: { email: "", role: "member" },
     onSuccess: () => {

@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { crewSettingsSchema, SAFETY_FACTOR_CLASSES, type CrewSettings } from "@/lib/validations/crew";
+import { CrewSettingsSchema, SAFETY_FACTOR_CLASSES, type CrewSettings } from "@/lib/validations/crew";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { FormError } from "@/components/forms/form-error";
 import { Field } from "@/components/ui/field";
@@ -22,7 +22,7 @@ const factorLabels: Record<(typeof SAFETY_FACTOR_CLASSES)[number], string> = {
 export function CrewSettingsForm({ settings, editable }: { settings: CrewSettings; editable: boolean }) {
   const router = useRouter();
   const notify = useToast();
-  const { form, submit, formError } = useApiForm(crewSettingsSchema, {
+  const { form, submit, formError } = useApiForm(CrewSettingsSchema, {
     url: "/api/crew/settings",
     method: "PATCH",
     defaultValues: settings,

@@ -16,23 +16,23 @@ export const newPassword = z
 
 const personName = z.string({ error: "Enter your name." }).trim().min(1, { error: "Enter your name." }).max(100, { error: "Use at most 100 characters." });
 
-export const signInSchema = z.object({
+export const SignInSchema = z.object({
   email,
   password: z.string({ error: "Enter your password." }).min(1, { error: "Enter your password." }).max(200, { error: "Use at most 200 characters." }),
 });
 
-export const signUpSchema = z.object({ name: personName, email, password: newPassword });
+export const SignUpSchema = z.object({ name: personName, email, password: newPassword });
 
-export const forgotPasswordSchema = z.object({ email });
+export const ForgotPasswordSchema = z.object({ email });
 
-export const resetPasswordSchema = z.object({
+export const ResetPasswordSchema = z.object({
   token: z.string({ error: "The reset link is incomplete." }).min(20, { error: "The reset link is incomplete." }).max(200),
   password: newPassword,
 });
 
-export const profileSchema = z.object({ name: personName, email });
+export const ProfileSchema = z.object({ name: personName, email });
 
-export const changePasswordSchema = z.object({
+export const ChangePasswordSchema = z.object({
   currentPassword: z.string({ error: "Enter your current password." }).min(1, { error: "Enter your current password." }),
   newPassword,
 });

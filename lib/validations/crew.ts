@@ -2,19 +2,19 @@ import { z } from "zod";
 import { ROLES } from "@/lib/roles";
 import { email } from "./account";
 
-export const roleSchema = z.enum(ROLES, { error: `Choose a role: ${ROLES.join(", ")}.` });
+export const RoleSchema = z.enum(ROLES, { error: `Choose a role: ${ROLES.join(", ")}.` });
 
-export const createCrewSchema = z.object({
+export const CreateCrewSchema = z.object({
   name: z.string({ error: "Name the crew." }).trim().min(2, { error: "Use at least 2 characters." }).max(80, { error: "Use at most 80 characters." }),
 });
 
-export const switchCrewSchema = z.object({ crewId: z.string({ error: "Choose a crew." }).min(1, { error: "Choose a crew." }) });
+export const SwitchCrewSchema = z.object({ crewId: z.string({ error: "Choose a crew." }).min(1, { error: "Choose a crew." }) });
 
-export const inviteSchema = z.object({ email, role: roleSchema });
+export const InviteSchema = z.object({ email, role: RoleSchema });
 
-export const changeRoleSchema = z.object({ role: roleSchema });
+export const ChangeRoleSchema = z.object({ role: RoleSchema });
 
-export const acceptInvitationSchema = z.object({ token: z.string({ error: "The invitation link is incomplete." }).min(20).max(200) });
+export const AcceptInvitationSchema = z.object({ token: z.string({ error: "The invitation link is incomplete." }).min(20).max(200) });
 
 // Below 1.5 a factor no longer leaves room for wear and dynamic loads; above 20 it is a typo.
 const factor = z
@@ -24,7 +24,7 @@ const factor = z
 
 export const SAFETY_FACTOR_CLASSES = ["webbing", "rope", "anchor", "connector", "sling", "pulley", "brake"] as const;
 
-export const crewSettingsSchema = z.object({
+export const CrewSettingsSchema = z.object({
   units: z.enum(["si", "us"], { error: "Choose SI or US units." }),
   minSafetyFactors: z.object(
     Object.fromEntries(SAFETY_FACTOR_CLASSES.map((c) => [c, factor])) as Record<(typeof SAFETY_FACTOR_CLASSES)[number], typeof factor>,
@@ -32,4 +32,4 @@ export const crewSettingsSchema = z.object({
   allowSelfSignOff: z.boolean({ error: "Choose yes or no." }),
 });
 
-export type CrewSettings = z.infer<typeof crewSettingsSchema>;
+export type CrewSettings = z.infer<typeof CrewSettingsSchema>;

@@ -9,7 +9,7 @@ describe("invitationProblem", () => {
     expect(invitationProblem(open, now)).toBeNull();
   });
   it("names the first reason an invitation can no longer be used", () => {
-    expect(invitationProblem(undefined, now)).toBe("unknown");
+    expect(invitationProblem(null, now)).toBe("unknown");
     expect(invitationProblem({ ...open, revokedAt: now, acceptedAt: now }, now)).toBe("revoked");
     expect(invitationProblem({ ...open, acceptedAt: now }, now)).toBe("used");
     expect(invitationProblem({ ...open, expiresAt: now }, now)).toBe("expired");

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { can, PERMISSIONS, ROLES } from "@/lib/roles";
-import { roleSchema } from "@/lib/validations/crew";
+import { RoleSchema } from "@/lib/validations/crew";
 
 describe("the role table", () => {
   it("orders roles from member to owner, each able to do all the one below may", () => {
@@ -17,7 +17,7 @@ describe("the role table", () => {
     expect(can("lead", "crew.settings")).toBe(true);
   });
   it("knows a role that does not exist", () => {
-    expect(roleSchema.safeParse("captain").success).toBe(false);
-    expect(roleSchema.safeParse("rigger").success).toBe(true);
+    expect(RoleSchema.safeParse("captain").success).toBe(false);
+    expect(RoleSchema.safeParse("rigger").success).toBe(true);
   });
 });

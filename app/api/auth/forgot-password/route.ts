@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { parseBody, route } from "@/lib/api";
-import { forgotPasswordSchema } from "@/lib/validations/account";
+import { ForgotPasswordSchema } from "@/lib/validations/account";
 import { findUserByEmail } from "@/db/users";
 import { createPasswordReset } from "@/db/password-resets";
 import { newToken } from "@/lib/tokens";
@@ -10,7 +10,7 @@ import { appOrigin } from "@/lib/app-origin";
 
 // The same answer whether or not the address has an account, so the form cannot probe for accounts.
 export const POST = route(async (request) => {
-  const { email } = await parseBody(request, forgotPasswordSchema);
+  const { email } = await parseBody(request, ForgotPasswordSchema);
   const user = await findUserByEmail(email);
   if (user) {
     const { token, tokenHash } = newToken();

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { parseBody, route } from "@/lib/api";
 import { RequestError } from "@/lib/http-errors";
-import { resetPasswordSchema } from "@/lib/validations/account";
+import { ResetPasswordSchema } from "@/lib/validations/account";
 import { resetPassword } from "@/db/password-resets";
 import { hashPassword } from "@/lib/auth/passwords";
 import { hashToken } from "@/lib/tokens";
@@ -14,7 +14,7 @@ const refusals = {
 
 // A new password signs the account out everywhere, since whoever knew the old one may be signed in.
 export const POST = route(async (request) => {
-  const { token, password } = await parseBody(request, resetPasswordSchema);
+  const { token, password } = await parseBody(request, ResetPasswordSchema);
   const passwordHash = await hashPassword(password);
   const result = await resetPassword(hashToken(token), passwordHash);
   if (result.outcome !== "ok") throw new RequestError(410, refusals[result.outcome]);

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { parseBody, route } from "@/lib/api";
 import { AccessError } from "@/lib/authz";
-import { signInSchema } from "@/lib/validations/account";
+import { SignInSchema } from "@/lib/validations/account";
 import { findUserByEmail } from "@/db/users";
 import { decoyHash, verifyPassword } from "@/lib/auth/passwords";
 import { startSession } from "@/lib/auth/session";
@@ -9,7 +9,7 @@ import { assertSignInAllowed, clearFailedSignIns, clientAddress, recordFailedSig
 
 // An unknown e-mail and a wrong password get the same answer, in the same time.
 export const POST = route(async (request) => {
-  const { email, password } = await parseBody(request, signInSchema);
+  const { email, password } = await parseBody(request, SignInSchema);
   const address = clientAddress(request);
   await assertSignInAllowed(email, address);
   const user = await findUserByEmail(email);

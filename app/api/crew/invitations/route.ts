@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { crewRoute, parseBody } from "@/lib/api";
-import { inviteSchema } from "@/lib/validations/crew";
+import { InviteSchema } from "@/lib/validations/crew";
 import { createInvitation, openInvitationsOf } from "@/db/invitations";
 import { INVITATION_DAYS } from "@/lib/invitation-state";
 import { newToken } from "@/lib/tokens";
@@ -11,7 +11,7 @@ import { appOrigin } from "@/lib/app-origin";
 export const GET = crewRoute("crew.invite", async ({ crew }) => NextResponse.json({ invitations: await openInvitationsOf(crew.id) }));
 
 export const POST = crewRoute("crew.invite", async ({ crew, user }, request) => {
-  const { email, role } = await parseBody(request, inviteSchema);
+  const { email, role } = await parseBody(request, InviteSchema);
   const { token, tokenHash } = newToken();
   const invitation = await createInvitation({ crewId: crew.id, email, role, tokenHash, invitedBy: user.id });
   const url = `${appOrigin(request)}/invitations/${token}`;

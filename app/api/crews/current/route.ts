@@ -2,11 +2,11 @@ import { NextResponse } from "next/server";
 import { parseBody, signedInRoute } from "@/lib/api";
 import { chooseCrew } from "@/lib/authz";
 import { RequestError } from "@/lib/http-errors";
-import { switchCrewSchema } from "@/lib/validations/crew";
+import { SwitchCrewSchema } from "@/lib/validations/crew";
 import { membershipIn } from "@/db/crews";
 
 export const POST = signedInRoute(async ({ user }, request) => {
-  const { crewId } = await parseBody(request, switchCrewSchema);
+  const { crewId } = await parseBody(request, SwitchCrewSchema);
   const membership = await membershipIn(user.id, crewId);
   if (!membership) throw new RequestError(404, "No crew of yours has that id.");
   await chooseCrew(crewId);

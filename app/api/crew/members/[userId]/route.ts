@@ -3,7 +3,7 @@ import { crewRoute, parseBody } from "@/lib/api";
 import { AccessError, type CrewContext } from "@/lib/authz";
 import { RequestError } from "@/lib/http-errors";
 import { can } from "@/lib/roles";
-import { changeRoleSchema } from "@/lib/validations/crew";
+import { ChangeRoleSchema } from "@/lib/validations/crew";
 import { changeMembership, type MembershipChange } from "@/db/crews";
 
 type Params = { userId: string };
@@ -15,7 +15,7 @@ function answer(outcome: MembershipChange, done: object): NextResponse {
 }
 
 export const PATCH = crewRoute<Params>("crew.roles", async ({ crew }, request, { userId }) => {
-  const { role } = await parseBody(request, changeRoleSchema);
+  const { role } = await parseBody(request, ChangeRoleSchema);
   return answer(await changeMembership(crew.id, userId, { role }), { userId, role });
 });
 
