@@ -1,8 +1,9 @@
 import type { GearKind } from "@/lib/validations/kit";
 import type { SiteGround, MeasurementMethod } from "@/lib/validations/sites";
 import { engineGround } from "@/lib/validations/sites";
-import type { ComponentCategory, SlipResult } from "@/physics";
+import type { SlipResult } from "@/physics";
 import { labelOf } from "./fields";
+import { ENGINE_CATEGORY_OF_KIND } from "@/lib/gear-categories";
 
 // The planner's gear comes from the crew's Kit: a picked model fills the engine's figures (mass, MBS,
 // stretch points, efficiency, rope diameter), and the brake is checked against the slip tests recorded
@@ -61,17 +62,6 @@ export interface GearProblem {
   field: string;
   message: string;
 }
-
-/** The engine's component category of each kind of gear that can sit in an anchor's load path. */
-export const COMPONENT_CATEGORY_OF_KIND: Partial<Record<GearKind, ComponentCategory>> = {
-  webbing: "webbing",
-  sling: "sling",
-  connector: "connector",
-  pulley: "other",
-  line_grip: "other",
-  brake: "other",
-  other: "other",
-};
 
 type Input = Record<string, unknown> & {
   spanM?: unknown;
@@ -166,7 +156,7 @@ export function prepareRigInput(values: unknown, catalogue: KitCatalogue, site: 
         });
         return;
       }
-      Object.assign(component, { name: model.name, category: COMPONENT_CATEGORY_OF_KIND[model.kind], mbsN: kN(model.specs.mbsKN) });
+      Object.assign(component, { name: model.name, category: ENGINE_CATEGORY_OF_KIND[model.kind], mbsN: kN(model.specs.mbsKN) });
     });
   }
 

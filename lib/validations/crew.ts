@@ -23,12 +23,11 @@ const factor = z
   .max(20, { error: "A minimum safety factor must be at most 20." });
 
 export const SAFETY_FACTOR_CLASSES = ["webbing", "rope", "anchor", "connector", "sling", "pulley", "brake"] as const;
+export type SafetyFactorClass = (typeof SAFETY_FACTOR_CLASSES)[number];
 
 export const CrewSettingsSchema = z.object({
   units: z.enum(["si", "us"], { error: "Choose SI or US units." }),
-  minSafetyFactors: z.object(
-    Object.fromEntries(SAFETY_FACTOR_CLASSES.map((c) => [c, factor])) as Record<(typeof SAFETY_FACTOR_CLASSES)[number], typeof factor>,
-  ),
+  minSafetyFactors: z.object(Object.fromEntries(SAFETY_FACTOR_CLASSES.map((c) => [c, factor])) as Record<SafetyFactorClass, typeof factor>),
   allowSelfSignOff: z.boolean({ error: "Choose yes or no." }),
 });
 

@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import example from "@/physics/examples/quarry-highline.json";
 import { evaluateRig, RigInputSchema } from "@/physics";
 import { compareResults, judgeAgreement } from "@/lib/rig-form/compare-results";
-import { engineMinimums, startingRig } from "@/lib/rig-form/starting-rig";
+import { startingRig } from "@/lib/rig-form/starting-rig";
+import { engineMinimums } from "@/lib/gear-categories";
 import { verticalExaggeration } from "@/lib/rig-form/exaggeration";
 
 describe("comparing the browser's result with the server's", () => {
