@@ -5,8 +5,8 @@ export function CautionNotice({ compact = false }: { compact?: boolean }) {
       <p className="font-semibold">⚠ Estimates, not guarantees</p>
       <p className={compact ? "mt-1 text-sm" : "mt-1"}>
         Every figure comes from a model and from your crew&apos;s own gear data. Verify tensions with a load cell, always rig a backup and redundant anchors,
-        follow the slackline standards in force where you rig (for example EN 16350 and DIN 79400) and defer to local rules, land managers and qualified,
-        trained riggers.
+        follow the slackline standards in force where you rig (for example DIN 79400 for slackline systems and the International Slackline Association&apos;s
+        highline-systems standard) and defer to local rules, land managers and qualified, trained riggers.
       </p>
     </aside>
   );
