@@ -23,48 +23,55 @@ const ropeCurve = [
   { tensionKN: 5, elongationPct: 3.1 },
 ];
 
+// Plain descriptions rather than brand-like names, so that no demo model is anyone's product.
 export const MODELS = [
   {
-    key: "ridgeback",
+    key: "tubular",
     kind: "webbing",
-    name: "Ridgeback 25 Tubular",
+    name: "Tubular webbing 25 mm",
     specs: { widthMm: 25, massPerMetreG: 48, mbsKN: 32, stretchPoints: webbingCurve },
     notes: "Main longline webbing.",
   },
   {
-    key: "lumen",
+    key: "flat",
     kind: "webbing",
-    name: "Lumen Flat 25",
+    name: "Flat webbing 25 mm",
     specs: { widthMm: 25, massPerMetreG: 39, mbsKN: 28, stretchPoints: webbingCurve.map((p) => ({ ...p, elongationPct: p.elongationPct * 1.2 })) },
     notes: "",
   },
   {
-    key: "quarry11",
+    key: "static-11",
     kind: "rope",
-    name: "Quarrystatic 11",
+    name: "Static rope 11 mm",
     specs: { diameterMm: 11, construction: "static", mbsKN: 30, massPerMetreG: 78, stretchPoints: ropeCurve },
     notes: "Tensioning rope.",
   },
   {
-    key: "quarry105",
+    key: "static-10.5",
     kind: "rope",
-    name: "Quarrystatic 10.5",
+    name: "Static rope 10.5 mm",
     specs: { diameterMm: 10.5, construction: "static", mbsKN: 27, massPerMetreG: 70, stretchPoints: ropeCurve },
     notes: "",
   },
   {
-    key: "talus",
+    key: "toothed-cam",
     kind: "brake",
-    name: "Talus Cam Brake",
+    name: "Toothed cam brake",
     specs: { minRopeMm: 9, maxRopeMm: 12, mbsKN: 22 },
     notes: "Toothed cam; inspect the teeth before each rig.",
   },
-  { key: "wren", kind: "brake", name: "Wren Smooth Capture", specs: { minRopeMm: 10, maxRopeMm: 11.5, mbsKN: 18 }, notes: "" },
-  { key: "scree", kind: "line_grip", name: "Scree Line Grip", specs: { minRopeMm: 10, maxRopeMm: 12, mbsKN: 15 }, notes: "" },
-  { key: "kestrel", kind: "pulley", name: "Kestrel 50 Pulley", specs: { sheaveDiameterMm: 50, efficiency: 0.93, mbsKN: 36 }, notes: "Ball-bearing sheave." },
-  { key: "shackle", kind: "connector", name: "Greyrock Steel Shackle 12", specs: { mbsKN: 60 }, notes: "" },
-  { key: "spindle", kind: "sling", name: "Spindle Sling 120", specs: { mbsKN: 40 }, notes: "" },
-  { key: "pad", kind: "other", name: "Felt Tree Pad", specs: {}, notes: "Protects bark under anchor slings." },
+  { key: "smooth-cam", kind: "brake", name: "Smooth cam brake", specs: { minRopeMm: 10, maxRopeMm: 11.5, mbsKN: 18 }, notes: "" },
+  { key: "line-grip", kind: "line_grip", name: "Rope line grip", specs: { minRopeMm: 10, maxRopeMm: 12, mbsKN: 15 }, notes: "" },
+  {
+    key: "pulley",
+    kind: "pulley",
+    name: "Ball-bearing pulley 50 mm",
+    specs: { sheaveDiameterMm: 50, efficiency: 0.93, mbsKN: 36 },
+    notes: "Ball-bearing sheave.",
+  },
+  { key: "shackle", kind: "connector", name: "Steel bow shackle 12 mm", specs: { mbsKN: 60 }, notes: "" },
+  { key: "sling", kind: "sling", name: "Round sling 120 cm", specs: { mbsKN: 40 }, notes: "" },
+  { key: "pad", kind: "other", name: "Felt tree pad", specs: {}, notes: "Protects bark under anchor slings." },
 ] as const;
 
 /** A synthetic slow pull: rising at `rate` N/s with a little noise; past `slipN` the rope creeps through 600 N lower. */
@@ -95,12 +102,20 @@ export async function seed(knex: Knex): Promise<void> {
         .returning("id");
       ids[m.key] = id;
     }
+    // The retired item failed the inspection that retired it: inspected first, retired two days later.
     const items = [
-      { model: "ridgeback", label: "RB-01", since: "2025-04-12" },
-      { model: "ridgeback", label: "RB-02", since: "2025-04-12" },
-      { model: "talus", label: "TC-3", since: "2024-09-01" },
-      { model: "kestrel", label: "K50-A", since: "2024-03-20" },
-      { model: "lumen", label: "LF-old", since: "2022-06-01", retiredOn: "2026-08-30", reason: "Edge abrasion after a sharp-rock anchor." },
+      { model: "tubular", label: "TW-01", since: "2025-04-12" },
+      { model: "tubular", label: "TW-02", since: "2025-04-12" },
+      { model: "toothed-cam", label: "CB-3", since: "2024-09-01" },
+      { model: "pulley", label: "P50-A", since: "2024-03-20" },
+      {
+        model: "flat",
+        label: "FW-old",
+        since: "2022-06-01",
+        inspectedOn: "2026-08-28",
+        retiredOn: "2026-08-30",
+        reason: "Edge abrasion after a sharp-rock anchor",
+      },
     ];
     for (const item of items) {
       const [{ id }] = await trx("gear_items")
@@ -117,20 +132,20 @@ export async function seed(knex: Knex): Promise<void> {
         crew_id: crew.id,
         item_id: id,
         inspected_by: tester.id,
-        inspected_on: "2026-10-04",
+        inspected_on: item.inspectedOn ?? "2026-10-04",
         result: item.retiredOn ? "fail" : "pass",
         notes: item.retiredOn ? "Cut through the edge fibres." : "",
       });
     }
 
     const tests = [
-      { device: "talus", rope: "quarry105", d: 10.5, result: "slipped", n: 7400, trace: { slipN: 7400, rate: 120, seconds: 80 } },
-      { device: "talus", rope: "quarry105", d: 10.5, result: "slipped", n: 7900 },
-      { device: "talus", rope: "quarry11", d: 11, result: "slipped", n: 8800, trace: { slipN: 8800, rate: 150, seconds: 75 } },
-      { device: "talus", rope: null, d: 10, result: "slipped", n: 6100 },
-      { device: "wren", rope: "quarry11", d: 11, result: "held", n: 9000, trace: { slipN: null, rate: 110, seconds: 82 } },
-      { device: "wren", rope: "quarry105", d: 10.5, result: "slipped", n: 5200 },
-      { device: "scree", rope: "quarry11", d: 11, result: "slipped", n: 4300 },
+      { device: "toothed-cam", rope: "static-10.5", d: 10.5, result: "slipped", n: 7400, trace: { slipN: 7400, rate: 120, seconds: 80 } },
+      { device: "toothed-cam", rope: "static-10.5", d: 10.5, result: "slipped", n: 7900 },
+      { device: "toothed-cam", rope: "static-11", d: 11, result: "slipped", n: 8800, trace: { slipN: 8800, rate: 150, seconds: 75 } },
+      { device: "toothed-cam", rope: null, d: 10, result: "slipped", n: 6100 },
+      { device: "smooth-cam", rope: "static-11", d: 11, result: "held", n: 9000, trace: { slipN: null, rate: 110, seconds: 82 } },
+      { device: "smooth-cam", rope: "static-10.5", d: 10.5, result: "slipped", n: 5200 },
+      { device: "line-grip", rope: "static-11", d: 11, result: "slipped", n: 4300 },
     ] as const;
     for (const test of tests) {
       let traceUploadId: string | null = null;

@@ -90,16 +90,16 @@ export async function seed(knex: Knex): Promise<void> {
   const example = startingRig(crew.min_safety_factors);
 
   const kitGear = {
-    mainline: { modelId: modelId("ridgeback") },
-    backup: { modelId: modelId("ridgeback"), ridesAlong: true },
-    brake: { modelId: modelId("talus"), ropeModelId: modelId("quarry105") },
-    tensioning: { ...example.tensioning, pulleyModelId: modelId("kestrel") },
+    mainline: { modelId: modelId("tubular") },
+    backup: { modelId: modelId("tubular"), ridesAlong: true },
+    brake: { modelId: modelId("toothed-cam"), ropeModelId: modelId("static-10.5") },
+    tensioning: { ...example.tensioning, pulleyModelId: modelId("pulley") },
     slipBench: [],
   };
   const anchor = (layout: Change) => ({
     layout,
     components: [
-      { modelId: modelId("spindle"), carries: "leg" },
+      { modelId: modelId("sling"), carries: "leg" },
       { modelId: modelId("shackle"), carries: "line" },
     ],
   });

@@ -42,6 +42,6 @@ test("a rigger adds a webbing with its stretch points, adds an item, retires it,
 
 test("a member reads the Kit but is offered no way to change it", async ({ page }) => {
   await signInAs(page, "member", "/kit");
-  await expect(page.getByRole("table", { name: "Gear models" })).toContainText("Talus Cam Brake");
+  await expect(page.getByRole("table", { name: "Gear models" })).toContainText("Toothed cam brake");
   await expect(page.getByRole("link", { name: "Add a gear model" })).toHaveCount(0);
 });

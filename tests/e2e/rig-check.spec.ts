@@ -50,11 +50,11 @@ test("a rigger checks the worked example, changes it, sees bad input refused bes
   // Exactly, or to within a billionth where the browser's and Node's Math functions round differently in the last bit.
   await expect(page.getByText(/The server agrees: every figure matches the browser's/)).toBeVisible();
 
-  // The crew's own slip bench (invented demo data, seeds/02): on 10.5 mm rope the Talus Cam Brake slipped at 7.40 kN lowest
+  // The crew's own slip bench (invented demo data, seeds/02): on 10.5 mm rope the Toothed cam brake slipped at 7.40 kN lowest
   // (a pull seeded at 7400 N, its slip taken from the trace) and at 7.90 kN.
   const lowestSlip = 7.4;
-  await expect(page.getByRole("table", { name: "From the crew's slip bench" })).toContainText("Talus Cam Brake");
-  await page.getByLabel("Brake device", { exact: true }).fill("Talus Cam Brake");
+  await expect(page.getByRole("table", { name: "From the crew's slip bench" })).toContainText("Toothed cam brake");
+  await page.getByLabel("Brake device", { exact: true }).fill("Toothed cam brake");
   await page.getByLabel("Rope diameter (mm)", { exact: true }).fill("10.5");
   const brake = page.getByRole("region", { name: "Brake" });
   await expect(brake).toContainText(`lowest measured slip of ${lowestSlip.toFixed(2)} kN`);

@@ -11,12 +11,12 @@ function pullCsv(): string {
 
 test("a tester uploads a trace, sees the chart and the detected onset, confirms it, and the slip table cell changes", async ({ page }) => {
   await signInAs(page, "rigger", "/slip-bench");
-  const cell = page.locator('[data-cell="Wren Smooth Capture 10.0"]');
+  const cell = page.locator('[data-cell="Smooth cam brake 10.0"]');
   await expect(cell).toContainText("untested");
 
   await page.getByRole("link", { name: "Record a slip test" }).click();
   await expect(page.getByRole("heading", { name: "Record a slip test" })).toBeVisible();
-  await page.getByLabel("Trace file (CSV)").setInputFiles({ name: "wren-10mm.csv", mimeType: "text/csv", buffer: Buffer.from(pullCsv()) });
+  await page.getByLabel("Trace file (CSV)").setInputFiles({ name: "smooth-cam-10mm.csv", mimeType: "text/csv", buffer: Buffer.from(pullCsv()) });
   await page.getByLabel("Force unit of the trace").selectOption("N");
   await page.getByRole("button", { name: "Read trace" }).click();
 
@@ -27,7 +27,7 @@ test("a tester uploads a trace, sees the chart and the detected onset, confirms 
   await expect(page.getByLabel("Force", { exact: true })).toHaveValue("5000");
   await page.screenshot({ path: ".data/test/playwright/slip-trace-detected.png", fullPage: true });
 
-  await page.getByLabel("Device tested").selectOption({ label: "Wren Smooth Capture" });
+  await page.getByLabel("Device tested").selectOption({ label: "Smooth cam brake" });
   await page.getByLabel("Rope (from the Kit)").selectOption({ label: "Not in the Kit" });
   await page.getByLabel("Rope diameter (mm)").fill("10");
   await page.getByRole("button", { name: "Confirm and save slip test" }).click();
@@ -36,7 +36,7 @@ test("a tester uploads a trace, sees the chart and the detected onset, confirms 
   await expect(cell).toContainText("5.00 kN");
   await expect(cell).toContainText("1 test");
   await cell.getByRole("link").click();
-  await expect(page.getByRole("heading", { name: "Tests of Wren Smooth Capture on 10.0 mm" })).toBeVisible();
+  await expect(page.getByRole("heading", { name: "Tests of Smooth cam brake on 10.0 mm" })).toBeVisible();
   await expect(page.getByRole("table", { name: "Slip tests" })).toContainText("slipped at 5000 N");
   await page.screenshot({ path: ".data/test/playwright/slip-table-after.png", fullPage: true });
 });
@@ -47,7 +47,7 @@ test("a lead exports the slip table and chart, publishes a read-only link, and r
   await page.getByRole("link", { name: "Download table as CSV" }).click();
   const csvFile = await (await csv).path();
   expect(readFileSync(csvFile, "utf8")).toMatch(
-    /^device,rope_diameter_mm,tests,slips,lowest_slip_kN,slip_spread_kN,held_to_at_least_kN\r\n"Scree Line Grip",11\.0,1,1,4\.30/,
+    /^device,rope_diameter_mm,tests,slips,lowest_slip_kN,slip_spread_kN,held_to_at_least_kN\r\n"Rope line grip",11\.0,1,1,4\.30/,
   );
   const png = page.waitForEvent("download");
   await page.getByRole("button", { name: "Save chart as PNG" }).click();
@@ -60,7 +60,7 @@ test("a lead exports the slip table and chart, publishes a read-only link, and r
   const visitor = await browser.newPage();
   await visitor.goto(url);
   await expect(visitor.getByRole("heading", { level: 1 })).toHaveText("Slip table of Greyrock Highline Collective");
-  await expect(visitor.getByRole("table")).toContainText("Talus Cam Brake");
+  await expect(visitor.getByRole("table")).toContainText("Toothed cam brake");
   await expect(visitor.getByText("Sol Brannock")).toHaveCount(0);
 
   await page.getByRole("button", { name: "Revoke the link" }).click();
