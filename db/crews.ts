@@ -60,6 +60,15 @@ export function membersOf(crewId: string): Promise<CrewMember[]> {
     .select({ userId: "users.id", name: "users.name", email: "users.email", role: "crew_members.role", joinedAt: "crew_members.joined_at" });
 }
 
+/** The crew's member with this e-mail, or null: an invitation to them would change nothing. */
+export async function memberByEmail(crewId: string, email: string): Promise<{ name: string; role: Role } | null> {
+  const row = await db("crew_members")
+    .join("users", "users.id", "crew_members.user_id")
+    .where({ "crew_members.crew_id": crewId, "users.email": email.toLowerCase() })
+    .first("users.name", "crew_members.role");
+  return row ?? null;
+}
+
 export type MembershipChange = "done" | "not_found" | "last_owner";
 
 /**

@@ -1,9 +1,10 @@
 import "server-only";
 import { cookies } from "next/headers";
-import { redirect } from "next/navigation";
+import { notFound, redirect } from "next/navigation";
 import type { User } from "lucia";
 import { getCurrentSession } from "./auth/session";
-import { can, type Action, type Role } from "./roles";
+import { can, refusalText, type Action, type MemberAction, type Role, type RoleRefusal } from "./roles";
+import { isUuid } from "./validations/ids";
 import { membershipIn, membershipsOf, type Crew } from "@/db/crews";
 
 export const CREW_COOKIE = "spanwright_crew";
@@ -39,28 +40,61 @@ export async function currentMembership(userId: string) {
   return (await membershipsOf(userId))[0] ?? null;
 }
 
-/** For route handlers and server actions: the caller's crew context, or an AccessError. */
-export async function authorize(action: Action): Promise<CrewContext> {
+/** The signed-in person's crew context, or an AccessError: 401 when nobody is signed in, 404 when they are in no crew. */
+async function crewContext(): Promise<CrewContext> {
   const signedIn = await getCurrentSession();
   if (!signedIn) throw new AccessError(401, "Sign in first.");
   const membership = await currentMembership(signedIn.user.id);
   if (!membership) throw new AccessError(404, "You are not in a crew yet: create one or accept an invitation.");
-  if (!can(membership.role, action)) {
-    throw new AccessError(403, `Your role in ${membership.crew.name} (${membership.role}) may not do this.`);
-  }
   return { user: signedIn.user, sessionId: signedIn.session.id, crew: membership.crew, role: membership.role };
 }
 
-/** For pages: redirects to sign-in (and back) or to crew creation instead of throwing. */
-export async function authorizePage(action: Action, returnTo: string): Promise<CrewContext> {
+/** For route handlers and server actions: the caller's crew context, or an AccessError saying why not. */
+export async function authorize(action: Action): Promise<CrewContext> {
+  const context = await crewContext();
+  if (!can(context.role, action)) throw new AccessError(403, refusalText(action, context.role, context.crew.name));
+  return context;
+}
+
+/** For pages: the crew context; a visitor not signed in goes to sign-in (and back), one in no crew to crew creation. */
+async function pageContext(returnTo: string): Promise<CrewContext> {
   try {
-    return await authorize(action);
+    return await crewContext();
   } catch (error) {
     if (!(error instanceof AccessError)) throw error;
     if (error.status === 401) redirect(`/sign-in?next=${encodeURIComponent(returnTo)}`);
-    if (error.status === 404) redirect("/crews/new");
-    throw error;
+    redirect("/crews/new");
   }
+}
+
+/**
+ * For a page every member may open. Called before any Suspense boundary (no loading.tsx above the page),
+ * so that its redirects are real HTTP redirects: see DEVELOPERS.md, "Pages answer with real statuses".
+ */
+export async function authorizePage(action: MemberAction, returnTo: string): Promise<CrewContext> {
+  const context = await pageContext(returnTo);
+  if (!can(context.role, action)) throw new AccessError(403, refusalText(action, context.role, context.crew.name));
+  return context;
+}
+
+/**
+ * For a page that needs more than a member (adding gear, recording a slip test, editing): the crew context,
+ * or the refusal that the page shows with <RoleRequired> instead of its content.
+ */
+export async function authorizeRolePage(
+  action: Action,
+  returnTo: string,
+): Promise<{ context: CrewContext; refusal: null } | { context: null; refusal: RoleRefusal }> {
+  const context = await pageContext(returnTo);
+  if (can(context.role, action)) return { context, refusal: null };
+  return { context: null, refusal: { action, role: context.role, crewName: context.crew.name } };
+}
+
+/** A page's row from its URL id: the crew's own row, or a real 404 when the id is no uuid or names none of its rows. */
+export async function crewRowOrNotFound<Row>(find: (crewId: string, id: string) => Promise<Row | null>, crewId: string, id: string): Promise<Row> {
+  const row = isUuid(id) ? await find(crewId, id) : null;
+  if (!row) notFound();
+  return row;
 }
 
 /** Remembers the crew this browser works in; a choice of a crew one is not in is ignored on read. */

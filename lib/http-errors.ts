@@ -13,7 +13,7 @@ export class RequestError extends Error {
   }
 }
 
-/** Zod's issues as one message per field path, in the words of the schema. */
+/** Zod's issues as one message per field path (the key the form puts the message beside), in the words of the schema. */
 export function fieldErrorsOf(error: ZodError): Record<string, string> {
   const errors: Record<string, string> = {};
   for (const issue of error.issues) {
@@ -23,10 +23,8 @@ export function fieldErrorsOf(error: ZodError): Record<string, string> {
   return errors;
 }
 
+/** A 400 whose message is the schema's own messages, each naming its field as the form labels it: never a field path. */
 export function invalidInput(error: ZodError): RequestError {
   const fields = fieldErrorsOf(error);
-  const summary = Object.entries(fields)
-    .map(([field, message]) => `${field}: ${message}`)
-    .join("; ");
-  return new RequestError(400, `The input is not valid (${summary}).`, fields);
+  return new RequestError(400, `Nothing was saved. ${[...new Set(Object.values(fields))].join(" ")}`, fields);
 }

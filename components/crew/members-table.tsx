@@ -18,6 +18,8 @@ export interface MemberRow {
 export function MembersTable({ members, selfId, canManage }: { members: MemberRow[]; selfId: string; canManage: boolean }) {
   const router = useRouter();
   const notify = useToast();
+  // The crew must keep an owner: its only owner can neither leave nor step down, and is told why up front.
+  const onlyOwner = members.filter((m) => m.role === "owner").length === 1 ? members.find((m) => m.role === "owner")!.userId : null;
   async function act(method: "PATCH" | "DELETE", member: MemberRow, body?: { role: Role }) {
     const result = await callApi(method, `/api/crew/members/${member.userId}`, body);
     if (!result.ok) return notify({ title: "Not changed", description: result.error, tone: "danger" });
@@ -36,7 +38,7 @@ export function MembersTable({ members, selfId, canManage }: { members: MemberRo
           key: "role",
           header: "Role",
           cell: (m) =>
-            canManage ? (
+            canManage && m.userId !== onlyOwner ? (
               <select
                 aria-label={`Role of ${m.name}`}
                 className={`${controlClasses} min-w-32`}
@@ -57,7 +59,11 @@ export function MembersTable({ members, selfId, canManage }: { members: MemberRo
           key: "actions",
           header: "Actions",
           cell: (m) =>
-            m.userId === selfId ? (
+            m.userId === onlyOwner && m.userId === selfId ? (
+              <span className="block max-w-xs text-sm text-ink-600">
+                You are the crew&apos;s only owner: make someone else an owner before you leave or step down.
+              </span>
+            ) : m.userId === selfId ? (
               <ConfirmButton
                 tone="secondary"
                 title="Leave this crew?"

@@ -16,6 +16,8 @@ interface ApiFormOptions<Input extends FieldValues, Output> {
   onSuccess: (body: Record<string, unknown>, values: Output) => void | Promise<void>;
 }
 
+export const FIX_THE_FIELDS = "Nothing was saved: each field marked below says what to change.";
+
 /**
  * A react-hook-form form validated in the browser with the same zod schema the route handler
  * uses, sent to that handler through `callApi`; the server's field errors land on the same fields.
@@ -27,8 +29,10 @@ export function useApiForm<Input extends FieldValues, Output>(schema: z.ZodType<
     setFormError(null);
     const answer = await callApi(options.method ?? "POST", options.url, options.toBody ? options.toBody(values) : values);
     if (!answer.ok) {
-      for (const [field, message] of Object.entries(answer.fieldErrors)) form.setError(field as Path<Input>, { type: "server", message });
-      setFormError(answer.error);
+      const fields = Object.entries(answer.fieldErrors);
+      for (const [field, message] of fields) form.setError(field as Path<Input>, { type: "server", message });
+      // Each field's message stands beside it; the form's own line only points there, so nothing is said twice.
+      setFormError(fields.length ? FIX_THE_FIELDS : answer.error);
       return;
     }
     await options.onSuccess(answer.body, values);

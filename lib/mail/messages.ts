@@ -1,5 +1,5 @@
 import type { OutgoingMail } from "./transport";
-import type { Role } from "@/lib/roles";
+import { withArticle, type Role } from "@/lib/roles";
 
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
@@ -19,7 +19,7 @@ export function invitationMail(input: { to: string; crewName: string; inviterNam
     input.to,
     `Join ${input.crewName} on Spanwright`,
     [
-      `${input.inviterName} has asked you to join ${input.crewName} on Spanwright as ${input.role === "owner" ? "an owner" : `a ${input.role}`}.`,
+      `${input.inviterName} has asked you to join ${input.crewName} on Spanwright as ${withArticle(input.role)}.`,
       "Spanwright is where the crew plans its lines, checks the numbers and signs rigs off before anyone walks.",
     ],
     { label: "Accept the invitation", url: input.url },

@@ -1,4 +1,3 @@
-import { notFound } from "next/navigation";
 import { z } from "zod";
 import { RequestError } from "@/lib/http-errors";
 
@@ -11,11 +10,4 @@ export const isUuid = (value: unknown): value is string => Uuid.safeParse(value)
 export function rowId(id: string, what: string): string {
   if (!isUuid(id)) throw new RequestError(404, `No such ${what} in this crew.`);
   return id;
-}
-
-/** A page's row from its URL id: the crew's own row, or the not-found page when the id is no uuid or names none of its rows. */
-export async function crewRowOrNotFound<Row>(find: (crewId: string, id: string) => Promise<Row | null>, crewId: string, id: string): Promise<Row> {
-  const row = isUuid(id) ? await find(crewId, id) : null;
-  if (!row) notFound();
-  return row;
 }

@@ -6,7 +6,7 @@ import { InviteForm } from "@/components/crew/invite-form";
 import { InvitationsList } from "@/components/crew/invitations-list";
 import { EmptyState } from "@/components/ui/empty-state";
 import { authorizePage } from "@/lib/authz";
-import { can } from "@/lib/roles";
+import { can, withArticle } from "@/lib/roles";
 import { membersOf } from "@/db/crews";
 import { openInvitationsOf } from "@/db/invitations";
 
@@ -20,7 +20,7 @@ export default async function CrewPage() {
     <>
       <PageHeader
         title={context.crew.name}
-        lead={`You are ${context.role === "owner" ? "an owner" : `a ${context.role}`} of this crew.`}
+        lead={`You are ${withArticle(context.role)} of this crew.`}
         actions={<Link href="/crew/settings">Crew settings</Link>}
       />
       <section aria-labelledby="people" className="space-y-3">

@@ -1,5 +1,6 @@
 import { describe, expect, it, vi } from "vitest";
-import { crewRowOrNotFound, isUuid, rowId } from "@/lib/validations/ids";
+import { isUuid, rowId } from "@/lib/validations/ids";
+import { crewRowOrNotFound } from "@/lib/authz";
 
 // RFC 9562, section 4: the variant bits (10xx) sit in the first digit of the fourth group.
 const ROW = "3f2b8c1e-7a4d-4c2e-9b1f-0d6e5a4c3b2a";

@@ -3,14 +3,17 @@ import Link from "next/link";
 import { PageHeader } from "@/components/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { SlipTestForm } from "@/components/slip-bench/slip-test-form";
-import { authorizePage } from "@/lib/authz";
+import { RoleRequired } from "@/components/role-required";
+import { authorizeRolePage } from "@/lib/authz";
 import { SLIP_DEVICE_KINDS, type GearSpecs } from "@/lib/validations/kit";
 import { listModels } from "@/db/kit";
 
 export const metadata: Metadata = { title: "Record a slip test" };
 
 export default async function NewSlipTestPage() {
-  const { crew } = await authorizePage("slip.write", "/slip-bench/new");
+  const { context, refusal } = await authorizeRolePage("slip.write", "/slip-bench/new");
+  if (refusal) return <RoleRequired title="Record a slip test" refusal={refusal} back={{ href: "/slip-bench", label: "Back to the slip bench" }} />;
+  const { crew } = context;
   const [devices, ropes] = await Promise.all([listModels(crew.id, SLIP_DEVICE_KINDS), listModels(crew.id, ["rope"])]);
   return (
     <>

@@ -2,6 +2,9 @@ import { NextResponse } from "next/server";
 import { crewRoute, parseBody } from "@/lib/api";
 import { InviteSchema } from "@/lib/validations/crew";
 import { createInvitation, openInvitationsOf } from "@/db/invitations";
+import { memberByEmail } from "@/db/crews";
+import { RequestError } from "@/lib/http-errors";
+import { withArticle } from "@/lib/roles";
 import { INVITATION_DAYS } from "@/lib/invitation-state";
 import { newToken } from "@/lib/tokens";
 import { sendMail } from "@/lib/mail/transport";
@@ -12,6 +15,11 @@ export const GET = crewRoute("crew.invite", async ({ crew }) => NextResponse.jso
 
 export const POST = crewRoute("crew.invite", async ({ crew, user }, request) => {
   const { email, role } = await parseBody(request, InviteSchema);
+  const member = await memberByEmail(crew.id, email);
+  if (member) {
+    const message = `${member.name} (${email}) is already in ${crew.name}, as ${withArticle(member.role)}: change their role in the People table instead of inviting them.`;
+    throw new RequestError(409, message, { email: message });
+  }
   const { token, tokenHash } = newToken();
   const invitation = await createInvitation({ crewId: crew.id, email, role, tokenHash, invitedBy: user.id });
   const url = `${appOrigin(request)}/invitations/${token}`;

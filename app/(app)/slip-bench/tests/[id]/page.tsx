@@ -2,11 +2,10 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { PageHeader } from "@/components/page-header";
 import { TraceChart } from "@/components/charts/trace-chart";
-import { authorizePage } from "@/lib/authz";
+import { authorizePage, crewRowOrNotFound } from "@/lib/authz";
 import { formatForce } from "@/lib/force-format";
 import { isCorrection } from "@/lib/slip-table";
 import type { TraceAnalysis } from "@/lib/trace-analysis";
-import { crewRowOrNotFound } from "@/lib/validations/ids";
 import { findSlipTest } from "@/db/slip-tests";
 import { traceAnalysis } from "@/db/uploads";
 
