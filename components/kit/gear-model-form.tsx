@@ -1,11 +1,12 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useFieldArray, useWatch } from "react-hook-form";
+import type { InputHTMLAttributes } from "react";
+import { useFieldArray, useWatch, type Control } from "react-hook-form";
 import type { z } from "zod";
-import { asNumber } from "@/components/forms/as-number";
 import { FormError } from "@/components/forms/form-error";
 import { useApiForm } from "@/components/forms/use-api-form";
+import { useQuantityText } from "@/components/forms/use-quantity-text";
 import { Button } from "@/components/ui/button";
 import { Field, FieldFrame, controlClasses } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
@@ -13,12 +14,18 @@ import {
   GEAR_KINDS,
   GEAR_KIND_LABELS,
   GearModelSchema,
-  MEASURES,
-  SPEC_SCHEMAS,
+  SPEC_KEYS,
+  measureLabel,
+  measureRange,
+  measureUnit,
   type GearKind,
+  type GearModel,
   type GearModelInput,
   type MeasureKey,
 } from "@/lib/validations/kit";
+import { asGiven, stretchTensionDigits } from "@/lib/figures";
+import { fromShown, unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
+import { specDigits, specFromShown } from "./spec-summary";
 
 // One form for every kind: the fields a kind shows are the keys of that kind's spec schema.
 interface FormValues {
@@ -42,7 +49,7 @@ const ORIGIN_AND_ONE = [
 ];
 
 function emptySpecs(kind: GearKind): FormValues["specs"] {
-  const keys = Object.keys(SPEC_SCHEMAS[kind].shape);
+  const keys = SPEC_KEYS[kind];
   return {
     ...(keys.includes("stretchPoints") ? { stretchPoints: ORIGIN_AND_ONE } : {}),
     ...(keys.includes("construction") ? { construction: "static" } : {}),
@@ -52,12 +59,64 @@ function emptySpecs(kind: GearKind): FormValues["specs"] {
 interface GearModelFormProps {
   /** The model being edited; a new model when absent. */
   model?: { id: string } & GearModelInput;
+  units: UnitSystem;
 }
 
-export function GearModelForm({ model }: GearModelFormProps) {
+type FormControl = Control<FormValues, unknown, GearModel>;
+
+/** One spec's box, in the crew's units; the form keeps the value in the Kit's own unit. */
+function SpecField({ control, specKey, units }: { control: FormControl; specKey: MeasureKey; units: UnitSystem }) {
+  const { input, error } = useQuantityText(
+    control,
+    `specs.${specKey}`,
+    (kept) => specDigits(specKey, kept, units),
+    (shown) => specFromShown(specKey, shown, units),
+  );
+  const unit = measureUnit(specKey, units);
+  return (
+    <Field
+      label={`${measureLabel(specKey, units)}${unit ? ` (${unit})` : ""}`}
+      hint={`${measureRange(specKey, units)}${specKey === "mbsKN" ? " — the rated minimum breaking strength, from the maker or a destructive test" : ""}`}
+      error={error}
+      {...input}
+    />
+  );
+}
+
+/** A stretch point's tension box: the crew's unit shown, kN kept (as the engine's stretch curve takes it). */
+function TensionInput({ control, index, units }: { control: FormControl; index: number; units: UnitSystem }) {
+  const { input, error } = useQuantityText(
+    control,
+    `specs.stretchPoints.${index}.tensionKN`,
+    (kN) => stretchTensionDigits(kN, units),
+    (shown) => fromShown(shown, "stretchTension", units),
+  );
+  return <PointCell label={`Point ${index + 1} tension, ${unitLabel("stretchTension", units)}`} error={error} input={input} />;
+}
+
+function PointCell({ label, error, input }: { label: string; error?: string; input: InputHTMLAttributes<HTMLInputElement> }) {
+  return (
+    <td className="pb-2 pr-3 align-top">
+      <input aria-label={label} inputMode="decimal" aria-invalid={error ? true : undefined} className={controlClasses} {...input} />
+      {error ? (
+        <p role="alert" className="text-sm text-danger-700">
+          {error}
+        </p>
+      ) : null}
+    </td>
+  );
+}
+
+function ElongationInput({ control, index }: { control: FormControl; index: number }) {
+  const { input, error } = useQuantityText(control, `specs.stretchPoints.${index}.elongationPct`, asGiven, (shown) => shown);
+  return <PointCell label={`Point ${index + 1} elongation, %`} error={error} input={input} />;
+}
+
+export function GearModelForm({ model, units }: GearModelFormProps) {
   const router = useRouter();
+  const schema = GearModelSchema[units];
   // The form holds every kind's fields loosely; the schema checks the chosen kind's.
-  const { form, submit, formError } = useApiForm(GearModelSchema as unknown as z.ZodType<z.output<typeof GearModelSchema>, FormValues>, {
+  const { form, submit, formError } = useApiForm<FormValues, GearModel>(schema as unknown as z.ZodType<GearModel, FormValues>, {
     url: model ? `/api/kit/models/${model.id}` : "/api/kit/models",
     method: model ? "PATCH" : "POST",
     defaultValues: model ? (model as FormValues) : { kind: "webbing", name: "", notes: "", specs: emptySpecs("webbing") },
@@ -66,11 +125,11 @@ export function GearModelForm({ model }: GearModelFormProps) {
       router.refresh();
     },
   });
-  const { register, setValue, formState } = form;
+  const { register, setValue, formState, control } = form;
   const { errors, isSubmitting } = formState;
-  const kind = useWatch({ control: form.control, name: "kind" }) as GearKind;
-  const points = useFieldArray({ control: form.control, name: "specs.stretchPoints" as "specs.stretchPoints" & never });
-  const specKeys = Object.keys(SPEC_SCHEMAS[kind].shape);
+  const kind = useWatch({ control, name: "kind" }) as GearKind;
+  const points = useFieldArray({ control, name: "specs.stretchPoints" as "specs.stretchPoints" & never });
+  const specKeys = SPEC_KEYS[kind];
 
   return (
     <form onSubmit={submit} noValidate className="max-w-2xl space-y-5">
@@ -104,17 +163,7 @@ export function GearModelForm({ model }: GearModelFormProps) {
               />
             );
           }
-          const measure = MEASURES[key as MeasureKey];
-          return (
-            <Field
-              key={key}
-              label={measure.unit ? `${measure.label} (${measure.unit})` : `${measure.label} (fraction of 1)`}
-              inputMode="decimal"
-              hint={`${measure.min}–${measure.max}${key === "mbsKN" ? " — the rated minimum breaking strength, from the maker or a destructive test" : ""}`}
-              error={errorAt(errors, `specs.${key}`)}
-              {...register(`specs.${key}`, { setValueAs: asNumber })}
-            />
-          );
+          return <SpecField key={key} control={control} specKey={key as MeasureKey} units={units} />;
         })}
         {specKeys.includes("stretchPoints") ? (
           <FieldFrame
@@ -129,7 +178,7 @@ export function GearModelForm({ model }: GearModelFormProps) {
               <thead>
                 <tr>
                   <th scope="col" className="pr-3 text-left">
-                    Tension (kN)
+                    Tension ({unitLabel("stretchTension", units)})
                   </th>
                   <th scope="col" className="pr-3 text-left">
                     Elongation (%)
@@ -142,25 +191,8 @@ export function GearModelForm({ model }: GearModelFormProps) {
               <tbody>
                 {points.fields.map((field, i) => (
                   <tr key={field.id}>
-                    {(["tensionKN", "elongationPct"] as const).map((part) => {
-                      const message = errorAt(errors, `specs.stretchPoints.${i}.${part}`);
-                      return (
-                        <td key={part} className="pb-2 pr-3 align-top">
-                          <input
-                            aria-label={`Point ${i + 1} ${part === "tensionKN" ? "tension, kN" : "elongation, %"}`}
-                            inputMode="decimal"
-                            aria-invalid={message ? true : undefined}
-                            className={controlClasses}
-                            {...register(`specs.stretchPoints.${i}.${part}`, { setValueAs: asNumber })}
-                          />
-                          {message ? (
-                            <p role="alert" className="text-sm text-danger-700">
-                              {message}
-                            </p>
-                          ) : null}
-                        </td>
-                      );
-                    })}
+                    <TensionInput control={control} index={i} units={units} />
+                    <ElongationInput control={control} index={i} />
                     <td className="pb-2 align-top">
                       <Button tone="quiet" onClick={() => points.remove(i)} disabled={points.fields.length <= 2} aria-label={`Remove point ${i + 1}`}>
                         ×

@@ -5,16 +5,19 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { GEAR_KINDS, GEAR_KIND_LABELS } from "@/lib/validations/kit";
 import type { GearModelRow } from "@/db/kit";
 import { SortableTable } from "@/components/ui/sortable-table";
-import { specSummary } from "./spec-summary";
+import type { UnitSystem } from "@/lib/rig-form/quantities";
+import { specSummary, specText } from "./spec-summary";
 import { StatusBadge } from "./status-badge";
 
-export function ModelTable({ models }: { models: GearModelRow[] }) {
+const mbsOf = (m: GearModelRow) => ("mbsKN" in m.specs ? m.specs.mbsKN : undefined);
+
+export function ModelTable({ models, units }: { models: GearModelRow[]; units: UnitSystem }) {
   return (
     <SortableTable
       caption="Gear models"
       rows={models}
       rowKey={(m) => m.id}
-      searchText={(m) => `${m.name} ${GEAR_KIND_LABELS[m.kind]} ${m.notes} ${specSummary(m.specs)}`}
+      searchText={(m) => `${m.name} ${GEAR_KIND_LABELS[m.kind]} ${m.notes} ${specSummary(m.specs, units)}`}
       filters={[
         { label: "Kind", options: GEAR_KINDS.map((k) => ({ value: k, label: GEAR_KIND_LABELS[k] })), valueOf: (m) => m.kind },
         {
@@ -39,13 +42,16 @@ export function ModelTable({ models }: { models: GearModelRow[] }) {
           ),
         },
         { key: "kind", header: "Kind", sortBy: (m) => GEAR_KIND_LABELS[m.kind], cell: (m) => GEAR_KIND_LABELS[m.kind] },
-        { key: "specs", header: "Specs", cell: (m) => specSummary(m.specs) },
+        { key: "specs", header: "Specs", cell: (m) => specSummary(m.specs, units) },
         {
           key: "mbs",
-          header: "MBS (kN)",
+          header: "MBS",
           align: "right",
-          sortBy: (m) => ("mbsKN" in m.specs ? (m.specs.mbsKN ?? null) : null),
-          cell: (m) => ("mbsKN" in m.specs ? (m.specs.mbsKN ?? "—") : "—"),
+          sortBy: (m) => mbsOf(m) ?? null,
+          cell: (m) => {
+            const mbs = mbsOf(m);
+            return mbs === undefined ? "—" : <span className="whitespace-nowrap">{specText("mbsKN", mbs, units)}</span>;
+          },
         },
         { key: "items", header: "Items in service", align: "right", sortBy: (m) => m.inServiceCount, cell: (m) => `${m.inServiceCount} of ${m.itemCount}` },
         { key: "status", header: "Status", sortBy: (m) => m.retiredOn ?? "", cell: (m) => <StatusBadge retiredOn={m.retiredOn} /> },

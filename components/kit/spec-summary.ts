@@ -1,12 +1,42 @@
-import { MEASURES, withUnit, type GearSpecs, type MeasureKey } from "@/lib/validations/kit";
+import {
+  capacityDigits,
+  capacityText,
+  efficiencyDigits,
+  efficiencyText,
+  asGiven,
+  massPerLengthDigits,
+  massPerLengthText,
+  millimetresText,
+} from "@/lib/figures";
+import type { UnitSystem } from "@/lib/rig-form/quantities";
+import { keptMeasure, measureLabel, type GearSpecs, type MeasureKey } from "@/lib/validations/kit";
 
-/** A model's specs in one line, each with its unit: "Width 25 mm · MBS 30 kN · 2 stretch points". */
-export function specSummary(specs: GearSpecs): string {
+/** A spec as the crew reads it: "30.00 kN" or "6744 lbf" (an MBS is a capacity, cut down), "0.52 oz/ft", "93 %", "25 mm". */
+export function specText(key: MeasureKey, kept: number, units: UnitSystem): string {
+  if (key === "mbsKN") return capacityText(kept * 1000, units);
+  if (key === "massPerMetreG") return massPerLengthText(kept, units);
+  if (key === "efficiency") return efficiencyText(kept);
+  return millimetresText(kept);
+}
+
+/** What an input box shows for a kept spec: the digits of `specText` (SI values as given). */
+export function specDigits(key: MeasureKey, kept: number, units: UnitSystem): string {
+  if (key === "mbsKN") return units === "us" ? capacityDigits(kept * 1000, units) : asGiven(kept);
+  if (key === "massPerMetreG") return massPerLengthDigits(kept, units);
+  if (key === "efficiency") return efficiencyDigits(kept);
+  return asGiven(kept);
+}
+
+/** What a person typed in a spec's box, as the value the Kit keeps. */
+export const specFromShown = (key: MeasureKey, shown: number, units: UnitSystem) => keptMeasure(key, shown, units);
+
+/** A model's specs in one line: "Width 25 mm · Mass per metre 48 g/m · MBS 32.00 kN · 5 stretch points". */
+export function specSummary(specs: GearSpecs, units: UnitSystem): string {
   const parts: string[] = [];
   for (const [key, value] of Object.entries(specs)) {
     if (key === "construction") parts.push(String(value));
     else if (key === "stretchPoints") parts.push(`${(value as unknown[]).length} stretch points`);
-    else if (typeof value === "number") parts.push(`${MEASURES[key as MeasureKey].label} ${withUnit(key as MeasureKey, value)}`);
+    else if (typeof value === "number") parts.push(`${measureLabel(key as MeasureKey, units)} ${specText(key as MeasureKey, value, units)}`);
   }
   return parts.join(" · ");
 }

@@ -1,14 +1,16 @@
-import { MEASURES, withUnit, type GearSpecs, type MeasureKey } from "@/lib/validations/kit";
+import { stretchTensionDigits } from "@/lib/figures";
+import { unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
+import { measureLabel, type GearSpecs, type MeasureKey, type StretchPointInput } from "@/lib/validations/kit";
+import { specText } from "./spec-summary";
 
-/** A model's specs as a definition list, stretch points as a small table. */
-export function SpecTable({ specs }: { specs: GearSpecs }) {
+/** A model's specs as a definition list in the crew's units, stretch points as a small table. */
+export function SpecTable({ specs, units }: { specs: GearSpecs; units: UnitSystem }) {
   const entries = Object.entries(specs);
   if (entries.length === 0) return <p className="text-ink-600">No specs recorded.</p>;
   return (
     <dl className="grid max-w-2xl grid-cols-[auto_1fr] gap-x-6 gap-y-2 rounded-panel border border-ink-200 bg-white p-4">
       {entries.map(([key, value]) => {
         if (key === "stretchPoints") {
-          const points = value as { tensionKN: number; elongationPct: number }[];
           return [
             <dt key={`${key}-t`} className="font-semibold">
               Stretch points
@@ -18,7 +20,7 @@ export function SpecTable({ specs }: { specs: GearSpecs }) {
                 <thead>
                   <tr>
                     <th scope="col" className="pr-4 text-left">
-                      Tension (kN)
+                      Tension ({unitLabel("stretchTension", units)})
                     </th>
                     <th scope="col" className="text-left">
                       Elongation (%)
@@ -26,9 +28,9 @@ export function SpecTable({ specs }: { specs: GearSpecs }) {
                   </tr>
                 </thead>
                 <tbody>
-                  {points.map((p) => (
+                  {(value as StretchPointInput[]).map((p) => (
                     <tr key={p.tensionKN}>
-                      <td className="pr-4 tabular-nums">{p.tensionKN}</td>
+                      <td className="pr-4 tabular-nums">{stretchTensionDigits(p.tensionKN, units)}</td>
                       <td className="tabular-nums">{p.elongationPct}</td>
                     </tr>
                   ))}
@@ -37,13 +39,20 @@ export function SpecTable({ specs }: { specs: GearSpecs }) {
             </dd>,
           ];
         }
-        const measure = MEASURES[key as MeasureKey];
+        if (key === "construction") {
+          return [
+            <dt key={`${key}-t`} className="font-semibold">
+              Construction
+            </dt>,
+            <dd key={`${key}-d`}>{String(value)}</dd>,
+          ];
+        }
         return [
           <dt key={`${key}-t`} className="font-semibold">
-            {measure?.label ?? "Construction"}
+            {measureLabel(key as MeasureKey, units)}
           </dt>,
           <dd key={`${key}-d`} className="tabular-nums">
-            {measure ? withUnit(key as MeasureKey, String(value)) : String(value)}
+            {specText(key as MeasureKey, value as number, units)}
           </dd>,
         ];
       })}

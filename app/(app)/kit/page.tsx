@@ -3,7 +3,7 @@ import Link from "next/link";
 import { PageHeader } from "@/components/page-header";
 import { buttonClasses } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/empty-state";
-import { CautionNotice } from "@/components/caution-notice";
+import { Caution } from "@/components/caution-notice";
 import { ModelTable } from "@/components/kit/model-table";
 import { ItemTable } from "@/components/kit/item-table";
 import { authorizePage } from "@/lib/authz";
@@ -31,7 +31,7 @@ export default async function KitPage() {
         <section aria-labelledby="models-heading" className="space-y-3">
           <h2 id="models-heading">Gear models</h2>
           {models.length ? (
-            <ModelTable models={models} />
+            <ModelTable models={models} units={crew.units} />
           ) : (
             <EmptyState title="No gear recorded yet" action={addModel}>
               Record each model your crew uses with its specs, then add the items you own.
@@ -46,7 +46,9 @@ export default async function KitPage() {
             <EmptyState title="No items yet">Add items from a gear model&apos;s page: one for each piece you own.</EmptyState>
           )}
         </section>
-        <CautionNotice compact />
+        <Caution>
+          The Kit records what the crew owns and what its makers rate it for; it does not say that an item is fit for use. Inspect every item before use.
+        </Caution>
       </div>
     </>
   );

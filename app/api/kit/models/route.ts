@@ -13,6 +13,6 @@ export const GET = crewRoute("kit.read", async ({ crew }, request) => {
 });
 
 export const POST = crewRoute("kit.write", async ({ crew }, request) => {
-  const model = await parseBody(request, GearModelSchema);
+  const model = await parseBody(request, GearModelSchema[crew.units]);
   return NextResponse.json({ model: await createModel(crew.id, model) }, { status: 201 });
 });

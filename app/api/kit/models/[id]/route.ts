@@ -14,7 +14,7 @@ export const GET = crewRoute<Params>("kit.read", async ({ crew }, _request, { id
 });
 
 export const PATCH = crewRoute<Params>("kit.write", async ({ crew }, request, { id }) => {
-  const model = await parseBody(request, GearModelSchema);
+  const model = await parseBody(request, GearModelSchema[crew.units]);
   const updated = await updateModel(crew.id, rowId(id, "gear model"), model);
   if (!updated) throw new RequestError(404, "No such gear model in this crew.");
   if (updated === "kind_changed") throw new RequestError(409, "A model's kind cannot change: record a new model of the other kind instead.");
