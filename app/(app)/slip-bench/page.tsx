@@ -3,7 +3,7 @@ import Link from "next/link";
 import { PageHeader } from "@/components/page-header";
 import { buttonClasses } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/empty-state";
-import { CautionNotice } from "@/components/caution-notice";
+import { Caution } from "@/components/caution-notice";
 import { SlipLoadChart } from "@/components/charts/slip-load-chart";
 import { ChartExport } from "@/components/charts/chart-export";
 import { SlipTableMatrix } from "@/components/slip-bench/slip-table-matrix";
@@ -88,12 +88,9 @@ export default async function SlipBenchPage({ searchParams }: { searchParams: Pr
 
 function SlipCautions() {
   return (
-    <div className="space-y-3">
-      <p className="max-w-prose rounded-panel border-2 border-caution-500 bg-caution-100 p-4 text-caution-800">
-        ⚠ Slip loads vary with rope wear, diameter, sheath, temperature, wetness and pull rate. A bench result holds only for the device and rope it was
-        measured on; keep a margin, back up every brake, and retest when the rope changes.
-      </p>
-      <CautionNotice compact />
-    </div>
+    <Caution>
+      Slip loads vary with rope wear, diameter, sheath, temperature, wetness and pull rate. A bench result holds only for the device and rope it was measured
+      on; keep a margin, back up every brake, and retest when the rope changes.
+    </Caution>
   );
 }

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { CautionNotice } from "@/components/caution-notice";
+import { Caution } from "@/components/caution-notice";
 import { SlipLoadChart } from "@/components/charts/slip-load-chart";
 import { SlipTableMatrix } from "@/components/slip-bench/slip-table-matrix";
 import { buildSlipTable } from "@/lib/slip-table";
@@ -43,11 +43,10 @@ export default async function SharedSlipTablePage({ params }: { params: Promise<
           </div>
         </>
       )}
-      <p className="max-w-prose rounded-panel border-2 border-caution-500 bg-caution-100 p-4 text-caution-800">
-        ⚠ These are one crew&apos;s bench results on its own gear. Slip loads vary with rope wear, diameter, sheath, temperature, wetness and pull rate: test
-        your own device on your own rope.
-      </p>
-      <CautionNotice compact />
+      <Caution>
+        These are one crew&apos;s bench results on its own gear. Slip loads vary with rope wear, diameter, sheath, temperature, wetness and pull rate: test your
+        own device on your own rope.
+      </Caution>
     </main>
   );
 }

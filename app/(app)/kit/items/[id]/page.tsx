@@ -10,12 +10,12 @@ import { RetireForm } from "@/components/kit/retire-form";
 import { FileUploadForm } from "@/components/kit/file-upload-form";
 import { FileList } from "@/components/kit/file-list";
 import { StatusBadge } from "@/components/kit/status-badge";
-import { authorizePage } from "@/lib/authz";
+import { authorizePage, crewRowOrNotFound } from "@/lib/authz";
 import { can } from "@/lib/roles";
 import { GEAR_KIND_LABELS, INSPECTION_RESULT_LABELS } from "@/lib/validations/kit";
-import { crewRowOrNotFound } from "@/lib/validations/ids";
 import { findItem, listInspections } from "@/db/kit";
 import { listUploads } from "@/db/uploads";
+import { asSentence } from "@/lib/sentence";
 
 export const metadata: Metadata = { title: "Item" };
 
@@ -46,7 +46,7 @@ export default async function GearItemPage({ params }: { params: Promise<{ id: s
       <div className="space-y-8">
         {item.retiredOn ? (
           <p className="rounded-panel bg-ink-100 p-4">
-            Retired on {item.retiredOn}: {item.retiredReason}. It cannot be put in a new plan.
+            Retired on {item.retiredOn}: {asSentence(item.retiredReason ?? "")} It cannot be put in a new plan, nor inspected again; its log stays.
           </p>
         ) : null}
         {item.notes ? <p className="max-w-prose whitespace-pre-line">{item.notes}</p> : null}
@@ -67,11 +67,11 @@ export default async function GearItemPage({ params }: { params: Promise<{ id: s
           ) : (
             <p className="text-ink-600">Never inspected. Inspect all gear before use.</p>
           )}
-          {writer ? <InspectionForm itemId={id} /> : null}
+          {writer && !item.retiredOn ? <InspectionForm itemId={id} /> : null}
         </section>
         <section aria-labelledby="photos-heading" className="space-y-3">
           <h2 id="photos-heading">Photos</h2>
-          <FileList files={photos} />
+          <FileList files={photos} removable={writer} />
           {writer ? <FileUploadForm purpose="photo" owner={{ itemId: id }} /> : null}
         </section>
         {writer ? (

@@ -4,7 +4,7 @@ import { PageHeader } from "@/components/page-header";
 import { buttonClasses } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { EmptyState } from "@/components/ui/empty-state";
-import { CautionNotice } from "@/components/caution-notice";
+import { Caution } from "@/components/caution-notice";
 import { ItemTable } from "@/components/kit/item-table";
 import { ItemForm } from "@/components/kit/item-form";
 import { RetireForm } from "@/components/kit/retire-form";
@@ -12,12 +12,12 @@ import { FileUploadForm } from "@/components/kit/file-upload-form";
 import { FileList } from "@/components/kit/file-list";
 import { SpecTable } from "@/components/kit/spec-table";
 import { StatusBadge } from "@/components/kit/status-badge";
-import { authorizePage } from "@/lib/authz";
+import { authorizePage, crewRowOrNotFound } from "@/lib/authz";
 import { can } from "@/lib/roles";
 import { GEAR_KIND_LABELS } from "@/lib/validations/kit";
-import { crewRowOrNotFound } from "@/lib/validations/ids";
 import { findModel, listItems } from "@/db/kit";
 import { listUploads } from "@/db/uploads";
+import { asSentence } from "@/lib/sentence";
 
 export const metadata: Metadata = { title: "Gear model" };
 
@@ -54,12 +54,12 @@ export default async function GearModelPage({ params }: { params: Promise<{ id: 
       <div className="space-y-8">
         {model.retiredOn ? (
           <p className="rounded-panel bg-ink-100 p-4">
-            Retired on {model.retiredOn}: {model.retiredReason}. No new items or plans may use it.
+            Retired on {model.retiredOn}: {asSentence(model.retiredReason ?? "")} No new items or plans may use it.
           </p>
         ) : null}
         <section aria-labelledby="specs-heading" className="space-y-3">
           <h2 id="specs-heading">Specs</h2>
-          <SpecTable specs={model.specs} />
+          <SpecTable specs={model.specs} units={crew.units} />
           {model.notes ? <p className="max-w-prose whitespace-pre-line">{model.notes}</p> : null}
         </section>
         <section aria-labelledby="items-heading" className="space-y-3">
@@ -76,7 +76,7 @@ export default async function GearModelPage({ params }: { params: Promise<{ id: 
         </section>
         <section aria-labelledby="files-heading" className="space-y-3">
           <h2 id="files-heading">Photos and manuals</h2>
-          <FileList files={files} />
+          <FileList files={files} removable={writer} />
           {writer ? (
             <div className="grid gap-6 md:grid-cols-2">
               <FileUploadForm purpose="photo" owner={{ modelId: id }} />
@@ -84,7 +84,10 @@ export default async function GearModelPage({ params }: { params: Promise<{ id: 
             </div>
           ) : null}
         </section>
-        <CautionNotice compact />
+        <Caution>
+          An MBS is the rated strength of new gear. Wear, UV, knots, edges and shock loads take strength away that no record shows: inspect every item before
+          use and retire it when in doubt.
+        </Caution>
       </div>
     </>
   );
