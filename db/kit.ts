@@ -122,21 +122,34 @@ export async function findItem(crewId: string, id: string): Promise<GearItemRow 
   return (await itemsOf(crewId).where("gear_items.id", id).first(itemColumns(db))) ?? null;
 }
 
-export type ItemCreation = GearItemRow | "model_not_found" | "model_retired";
+/** True when the database refused a second item of the same model with the same label (migration 20261201000012). */
+const isDuplicateLabel = (error: unknown) => (error as { constraint?: string } | null)?.constraint === "gear_items_model_label";
+
+export type ItemCreation = GearItemRow | "model_not_found" | "model_retired" | "duplicate_label";
 
 export async function createItem(crewId: string, item: GearItem): Promise<ItemCreation> {
   const model = await findModel(crewId, item.modelId);
   if (!model) return "model_not_found";
   if (model.retiredOn) return "model_retired";
-  const [{ id }] = await db("gear_items")
-    .insert({ crew_id: crewId, model_id: item.modelId, label: item.label, in_service_since: item.inServiceSince, notes: item.notes })
-    .returning("id");
-  return (await findItem(crewId, id))!;
+  try {
+    const [{ id }] = await db("gear_items")
+      .insert({ crew_id: crewId, model_id: item.modelId, label: item.label, in_service_since: item.inServiceSince, notes: item.notes })
+      .returning("id");
+    return (await findItem(crewId, id))!;
+  } catch (error) {
+    if (isDuplicateLabel(error)) return "duplicate_label";
+    throw error;
+  }
 }
 
-export async function updateItem(crewId: string, id: string, item: GearItemEdit): Promise<GearItemRow | null> {
-  const count = await db("gear_items").where({ crew_id: crewId, id }).update({ label: item.label, in_service_since: item.inServiceSince, notes: item.notes });
-  return count ? findItem(crewId, id) : null;
+export async function updateItem(crewId: string, id: string, item: GearItemEdit): Promise<GearItemRow | null | "duplicate_label"> {
+  try {
+    const count = await db("gear_items").where({ crew_id: crewId, id }).update({ label: item.label, in_service_since: item.inServiceSince, notes: item.notes });
+    return count ? findItem(crewId, id) : null;
+  } catch (error) {
+    if (isDuplicateLabel(error)) return "duplicate_label";
+    throw error;
+  }
 }
 
 export async function retireItem(crewId: string, id: string, retirement: Retirement): Promise<GearItemRow | null> {
@@ -170,9 +183,16 @@ export function listInspections(crewId: string, itemId: string): Promise<Inspect
     );
 }
 
-export async function addInspection(crewId: string, itemId: string, inspectorId: string, inspection: Inspection): Promise<InspectionRow | null> {
+/** Records an inspection of an item in service; a retired item is not inspected again (its log is kept as it was). */
+export async function addInspection(
+  crewId: string,
+  itemId: string,
+  inspectorId: string,
+  inspection: Inspection,
+): Promise<InspectionRow | null | { retiredOn: string }> {
   const item = await findItem(crewId, itemId);
   if (!item) return null;
+  if (item.retiredOn) return { retiredOn: item.retiredOn };
   const [row] = await db("gear_inspections")
     .insert({
       crew_id: crewId,

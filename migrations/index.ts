@@ -3,6 +3,7 @@ import * as crewsAndPeople from "./20261201000001_crews_and_people";
 import * as accountsAndInvitations from "./20261201000002_accounts_and_invitations";
 import * as kit from "./20261201000010_kit";
 import * as slipTests from "./20261201000011_slip_tests";
+import * as uniqueItemLabels from "./20261201000012_unique_item_labels";
 import * as sitesAndRigs from "./20261201000020_sites_and_rigs";
 
 // Every migration, in order, imported statically so that the same list loads under tsx, Vitest
@@ -12,6 +13,7 @@ const migrations: Record<string, Knex.Migration> = {
   "20261201000002_accounts_and_invitations.ts": accountsAndInvitations,
   "20261201000010_kit.ts": kit,
   "20261201000011_slip_tests.ts": slipTests,
+  "20261201000012_unique_item_labels.ts": uniqueItemLabels,
   "20261201000020_sites_and_rigs.ts": sitesAndRigs,
 };
 

@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { crewRoute, parseBody } from "@/lib/api";
 import { RequestError } from "@/lib/http-errors";
 import { rowId } from "@/lib/validations/ids";
-import { GearItemEditSchema } from "@/lib/validations/kit";
+import { GearItemEditSchema, duplicateLabelMessage } from "@/lib/validations/kit";
 import { findItem, listInspections, updateItem } from "@/db/kit";
 import { listUploads } from "@/db/uploads";
 
@@ -20,9 +20,10 @@ export const PATCH = crewRoute<Params>("kit.write", async ({ crew }, request, { 
   const current = await findItem(crew.id, rowId(id, "item"));
   if (!current) throw new RequestError(404, "No such item in this crew.");
   if (current.retiredOn && edit.inServiceSince > current.retiredOn) {
-    throw new RequestError(400, `In service since cannot be after the day it was retired (${current.retiredOn}).`, {
-      inServiceSince: "After the retirement date.",
-    });
+    const message = `In service since cannot be after the day it was retired (${current.retiredOn}).`;
+    throw new RequestError(400, message, { inServiceSince: message });
   }
-  return NextResponse.json({ item: await updateItem(crew.id, id, edit) });
+  const updated = await updateItem(crew.id, id, edit);
+  if (updated === "duplicate_label") throw new RequestError(409, duplicateLabelMessage(edit.label), { label: duplicateLabelMessage(edit.label) });
+  return NextResponse.json({ item: updated });
 });

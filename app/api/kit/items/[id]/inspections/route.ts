@@ -9,5 +9,7 @@ export const POST = crewRoute<{ id: string }>("kit.write", async ({ crew, user }
   const inspection = await parseBody(request, InspectionSchema);
   const row = await addInspection(crew.id, rowId(id, "item"), user.id, inspection);
   if (!row) throw new RequestError(404, "No such item in this crew.");
+  if ("retiredOn" in row)
+    throw new RequestError(409, `This item was retired on ${row.retiredOn}: a retired item is not inspected again, and its log stays as it was.`);
   return NextResponse.json({ inspection: row }, { status: 201 });
 });
