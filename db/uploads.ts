@@ -78,3 +78,15 @@ export function listUploads(crewId: string, of: UploadOwner): Promise<UploadRow[
     .orderBy("created_at", "desc")
     .select(columns);
 }
+
+/**
+ * Removes a photo's or a manual's record and answers it, so its bytes can go from storage next. A trace is
+ * kept: it is the evidence of a slip test, removed only with its crew.
+ */
+export async function deleteUpload(crewId: string, id: string): Promise<UploadRow | null | "trace"> {
+  const upload = await findUpload(crewId, id);
+  if (!upload) return null;
+  if (upload.purpose === "trace") return "trace";
+  await db("uploads").where({ crew_id: crewId, id }).delete();
+  return upload;
+}

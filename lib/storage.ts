@@ -1,5 +1,5 @@
 import "server-only";
-import { GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { DeleteObjectCommand, GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 
 // File bytes live in S3; the bucket, endpoint and keys come from the environment, so the local fake
 // and a real bucket are the same code.
@@ -46,4 +46,9 @@ export async function getObjectStream(key: string): Promise<ReadableStream | nul
     if (error instanceof NoSuchKey) return null;
     throw error;
   }
+}
+
+/** Removes an object; removing one the bucket does not have is not an error (S3 answers the same). */
+export async function deleteObject(key: string): Promise<void> {
+  await client().send(new DeleteObjectCommand({ Bucket: setting("S3_BUCKET"), Key: key }));
 }

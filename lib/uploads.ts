@@ -82,6 +82,26 @@ export function traceText(fileName: string, bytes: Uint8Array): { contentType: s
   }
 }
 
+/**
+ * A file's content type when it is what its name says and, for a photo, its pixels decode: a cut-short or
+ * damaged image (libvips through sharp, failing on decode errors) is refused instead of showing as a broken picture.
+ */
+export async function checkUpload(purpose: UploadPurpose, fileName: string, bytes: Uint8Array): Promise<string> {
+  const contentType = checkFileType(purpose, fileName, bytes);
+  if (purpose === "photo") {
+    const { default: sharp } = await import("sharp");
+    try {
+      await sharp(bytes, { failOn: "error" }).stats();
+    } catch {
+      throw new RequestError(
+        415,
+        `"${fileName}" is a damaged image: its picture cannot be read, perhaps because the file was cut short. Upload it again from the camera or phone.`,
+      );
+    }
+  }
+  return contentType;
+}
+
 export function checkFileSize(purpose: UploadPurpose, fileName: string, size: number): void {
   if (size === 0) throw new RequestError(400, `"${fileName}" is empty.`);
   if (size > UPLOAD_LIMITS[purpose]) {

@@ -1,7 +1,8 @@
 import type { UploadRow } from "@/db/uploads";
+import { RemoveFileButton } from "./remove-file-button";
 
-/** Photos as thumbnails and manuals as links, each served only to this crew through /api/uploads. */
-export function FileList({ files }: { files: UploadRow[] }) {
+/** Photos as thumbnails and manuals as links, each served only to this crew through /api/uploads; a rigger may remove them. */
+export function FileList({ files, removable }: { files: UploadRow[]; removable: boolean }) {
   if (files.length === 0) return <p className="text-ink-600">No files yet.</p>;
   return (
     <ul className="flex flex-wrap gap-4">
@@ -19,6 +20,11 @@ export function FileList({ files }: { files: UploadRow[] }) {
           <span className="block text-xs text-ink-500">
             {(f.byteSize / 1024).toFixed(0)} KiB · SHA-256 {f.sha256.slice(0, 12)}…
           </span>
+          {removable ? (
+            <div className="mt-2">
+              <RemoveFileButton id={f.id} fileName={f.fileName} />
+            </div>
+          ) : null}
         </li>
       ))}
     </ul>

@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { crewRoute } from "@/lib/api";
 import { RequestError } from "@/lib/http-errors";
 import { putObject } from "@/lib/storage";
-import { checkFileType, randomStorageKey, readUploadForm } from "@/lib/uploads";
+import { checkUpload, randomStorageKey, readUploadForm } from "@/lib/uploads";
 import { sha256Hex } from "@/lib/sha256";
 import { findItem, findModel } from "@/db/kit";
 import { insertUpload } from "@/db/uploads";
@@ -26,7 +26,7 @@ export const POST = crewRoute("kit.write", async ({ crew, user }, request) => {
         : { modelId: isUuid(modelId) && (await findModel(crew.id, modelId)) ? modelId : null };
   if (!Object.values(owner)[0]) throw new RequestError(404, "Attach the file to an item, a gear model or a site of this crew (itemId, modelId or siteId).");
   if (purpose === "manual" && !("modelId" in owner)) throw new RequestError(400, "Manuals belong to a gear model: send modelId.");
-  const contentType = checkFileType(purpose, file.name, bytes);
+  const contentType = await checkUpload(purpose, file.name, bytes);
   const sha256 = sha256Hex(bytes);
   const storageKey = randomStorageKey();
   await putObject(storageKey, bytes, contentType, sha256);
