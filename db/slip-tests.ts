@@ -119,11 +119,11 @@ export async function slipTableLinkOf(crewId: string): Promise<{ createdAt: stri
 }
 
 /** The crew behind a live link, by its token's hash; null for an unknown or revoked one. */
-export async function crewOfSlipTableLink(tokenHash: string): Promise<{ id: string; name: string } | null> {
+export async function crewOfSlipTableLink(tokenHash: string): Promise<{ id: string; name: string; units: "si" | "us" } | null> {
   const row = await db("slip_table_links")
     .join("crews", "crews.id", "slip_table_links.crew_id")
     .where({ "slip_table_links.token_sha256": tokenHash })
     .whereNull("slip_table_links.revoked_at")
-    .first("crews.id", "crews.name");
+    .first("crews.id", "crews.name", "crews.units");
   return row ?? null;
 }

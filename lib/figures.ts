@@ -9,7 +9,10 @@ import { toShown, type UnitSystem } from "./rig-form/quantities";
 export const forceUnitOf = (units: UnitSystem): ForceUnit => (units === "us" ? "lbf" : "kN");
 
 /** A capacity (an MBS, a slip load, a held-to bound, a spread of slips), cut down at the shown precision: "4.30 kN", "966 lbf". */
-export const capacityText = (newtons: number, units: UnitSystem) => formatForce(newtons, forceUnitOf(units));
+export const capacityText = (newtons: number, units: UnitSystem) => capacityInUnit(newtons, forceUnitOf(units));
+
+/** The same in a unit of its own: a force as the tester recorded it, in N, kN, lbf or kgf. */
+export const capacityInUnit = (newtons: number, unit: ForceUnit) => formatForce(newtons, unit);
 
 /** The digits of `capacityText`, without the unit: for a CSV column or an input box. */
 export const capacityDigits = (newtons: number, units: UnitSystem) => forceDigits(newtons, forceUnitOf(units));
@@ -35,5 +38,6 @@ export const efficiencyText = (fraction: number) => `${efficiencyDigits(fraction
 /** A rope diameter, webbing width or sheave size, in millimetres as the trade gives them everywhere. */
 export const millimetresText = (mm: number) => `${asGiven(mm)} mm`;
 
-/** A rope diameter as the slip table heads its columns: to a tenth of a millimetre. */
-export const ropeDiameterText = (mm: number) => `${mm.toFixed(1)} mm`;
+/** A rope diameter as the slip bench gives it: to a tenth of a millimetre. */
+export const ropeDiameterDigits = (mm: number) => mm.toFixed(1);
+export const ropeDiameterText = (mm: number) => `${ropeDiameterDigits(mm)} mm`;

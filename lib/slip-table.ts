@@ -1,5 +1,6 @@
 import type { SlipResult } from "@/physics";
-import { forceDigits } from "./force-format";
+import { capacityDigits, forceUnitOf, ropeDiameterDigits } from "./figures";
+import type { UnitSystem } from "./rig-form/quantities";
 
 // The slip table: for each device and rope diameter, what the crew's bench has shown. A held-to result
 // is a lower bound and never counts as a slip load.
@@ -71,15 +72,21 @@ export function buildSlipTable(tests: readonly SlipTableTest[]): SlipTable {
 export const toSlipResults = (tests: readonly SlipTableTest[]): SlipResult[] =>
   tests.map((t) => ({ device: t.deviceName, ropeDiameterMm: t.ropeDiameterMm, result: t.result, forceN: t.forceN }));
 
-/** The table as CSV, one row per cell, forces in kN cut down to 0.01 kN; held-only cells give their bound, never a slip load. */
-export function slipTableCsv(table: SlipTable): string {
+/**
+ * The table as CSV, one row per cell, forces in the crew's unit (kN or lbf) cut down at the shown precision, the
+ * unit named in each force column's header; held-only cells give their bound, never a slip load.
+ */
+export function slipTableCsv(table: SlipTable, units: UnitSystem): string {
   const names = new Map(table.devices.map((d) => [d.id, d.name]));
-  const kN = (n: number | null) => (n === null ? "" : forceDigits(n, "kN"));
+  const force = (n: number | null) => (n === null ? "" : capacityDigits(n, units));
+  const unit = forceUnitOf(units);
   const quote = (text: string) => `"${text.replace(/"/g, '""')}"`;
   const rows = [...table.cells]
     .sort((a, b) => names.get(a.deviceId)!.localeCompare(names.get(b.deviceId)!) || a.ropeDiameterMm - b.ropeDiameterMm)
-    .map((c) => [quote(names.get(c.deviceId)!), c.ropeDiameterMm.toFixed(1), c.tests, c.slips, kN(c.lowestSlipN), kN(c.spreadN), kN(c.highestHeldN)].join(","));
-  return ["device,rope_diameter_mm,tests,slips,lowest_slip_kN,slip_spread_kN,held_to_at_least_kN", ...rows].join("\r\n") + "\r\n";
+    .map((c) =>
+      [quote(names.get(c.deviceId)!), ropeDiameterDigits(c.ropeDiameterMm), c.tests, c.slips, force(c.lowestSlipN), force(c.spreadN), force(c.highestHeldN)].join(","),
+    );
+  return [`device,rope_diameter_mm,tests,slips,lowest_slip_${unit},slip_spread_${unit},held_to_at_least_${unit}`, ...rows].join("\r\n") + "\r\n";
 }
 
 /**

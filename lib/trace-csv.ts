@@ -52,14 +52,24 @@ interface Columns {
   timeScale: number;
 }
 
+/**
+ * The time and force columns a header names. A column headed like a time (time, t, s, sec…) is the time and
+ * one headed like a force (force, load, kN, lbf…) the force; failing a name, the first other column stands in.
+ */
 function columnsFromHeader(header: string[], unit: ForceUnit): Columns {
-  const time = Math.max(
-    0,
-    header.findIndex((h) => TIME_HEADER.test(h)),
-  );
-  const force = header.findIndex((h, i) => i !== time && FORCE_HEADER.test(h));
-  const forceIndex = force >= 0 ? force : header.findIndex((_, i) => i !== time);
-  if (forceIndex < 0) throw traceError(`The header "${header.join(", ")}" has no force column: a trace needs a time column and a force column.`);
+  const shown = header.map((h) => `"${h}"`).join(", ");
+  if (header.length < 2) {
+    const only = TIME_HEADER.test(header[0])
+      ? "only a time column: a trace needs a force column beside it"
+      : FORCE_HEADER.test(header[0])
+        ? "only a force column: a trace needs a time column (in seconds) beside it"
+        : "only one column: a trace needs a time column (in seconds) and a force column";
+    throw traceError(`The header ${shown} has ${only}.`);
+  }
+  const namedTime = header.findIndex((h) => TIME_HEADER.test(h));
+  const namedForce = header.findIndex((h, i) => i !== namedTime && FORCE_HEADER.test(h));
+  const forceIndex = namedForce >= 0 ? namedForce : header.findIndex((_, i) => i !== Math.max(namedTime, 0));
+  const time = namedTime >= 0 ? namedTime : header.findIndex((_, i) => i !== forceIndex);
   const written = HEADER_UNIT.exec(header[forceIndex].trim())?.[1];
   if (written && written !== unit) {
     throw traceError(
@@ -111,7 +121,8 @@ export function parseTraceCsv(source: string, unit: ForceUnit): ParsedTrace {
       const row = step.data;
       if (row.length === 1 && row[0].trim() === "") return;
       if (!columns) {
-        const looksNumeric = row.length >= 2 && !Number.isNaN(numberOf(row[0], decimalComma)) && !Number.isNaN(numberOf(row[1], decimalComma));
+        // A first row of numbers is data (a lone number too: the row check below then says a field is missing).
+        const looksNumeric = !Number.isNaN(numberOf(row[0], decimalComma)) && (row.length < 2 || !Number.isNaN(numberOf(row[1], decimalComma)));
         if (!looksNumeric) {
           header = row.map((h) => h.trim());
           columns = columnsFromHeader(header, unit);

@@ -6,13 +6,35 @@ export function linearScale(domain: [number, number], range: [number, number]) {
   return (value: number) => r0 + ((value - d0) / span) * (r1 - r0);
 }
 
-/** Round tick values (1, 2 or 5 times a power of ten) covering [min, max], about `count` of them. */
-export function niceTicks(min: number, max: number, count = 5): number[] {
-  if (!(max > min)) return [min];
+/** An axis tick: its value, and its text with as many decimals as the step between ticks needs. */
+export interface Tick {
+  value: number;
+  text: string;
+}
+
+/**
+ * Round ticks (1, 2 or 5 times a power of ten apart) covering [min, max], about `count` of them. Each tick
+ * is an integer count of steps times the step's integer mantissa, scaled by an exact power of ten, so no
+ * float noise builds up from tick to tick (0.3, never 0.30000000000000004), and zero is never "-0".
+ */
+export function axisTicks(min: number, max: number, count = 5): Tick[] {
+  if (!Number.isFinite(min) || !Number.isFinite(max)) return [];
+  if (!(max > min)) return [{ value: min, text: tickText(min, 0) }];
   const raw = (max - min) / count;
-  const power = 10 ** Math.floor(Math.log10(raw));
-  const step = [1, 2, 5, 10].map((m) => m * power).find((s) => s >= raw) ?? 10 * power;
-  const ticks: number[] = [];
-  for (let t = Math.ceil(min / step) * step; t <= max + step * 1e-9; t += step) ticks.push(Number(t.toPrecision(12)));
+  let power = Math.floor(Math.log10(raw));
+  let mantissa = [1, 2, 5, 10].find((m) => m * 10 ** power >= raw * (1 - 1e-12)) ?? 10;
+  if (mantissa === 10) [mantissa, power] = [1, power + 1];
+  // value(k) = k·mantissa·10^power, computed as an integer times or divided by an exact power of ten.
+  const value = (k: number) => (power >= 0 ? k * mantissa * 10 ** power : (k * mantissa) / 10 ** -power);
+  const step = value(1);
+  const decimals = Math.max(0, -power);
+  const ticks: Tick[] = [];
+  for (let k = Math.ceil(min / step - 1e-9); value(k) <= max + step * 1e-9; k++) ticks.push({ value: value(k) || 0, text: tickText(value(k), decimals) });
   return ticks;
+}
+
+/** A tick's text at a fixed number of decimals; zero reads "0", never "-0" or "-0.00". */
+function tickText(value: number, decimals: number): string {
+  const text = value.toFixed(decimals);
+  return Number(text) === 0 ? (0).toFixed(decimals) : text;
 }

@@ -1,21 +1,26 @@
-import { formatForce } from "@/lib/force-format";
-import { fromNewtons, type ForceUnit } from "@/physics";
-import { linearScale, niceTicks } from "./scale";
+import { capacityText, forceUnitOf } from "@/lib/figures";
+import type { UnitSystem } from "@/lib/rig-form/quantities";
+import { slipResultText } from "@/lib/validations/slip-tests";
+import { fromNewtons } from "@/physics";
+import { axisTicks, linearScale } from "./scale";
 
 interface TraceChartProps {
   time: number[];
   /** Newtons. */
   force: number[];
-  unit: ForceUnit;
+  units: UnitSystem;
   onset: { kind: "slipped" | "held"; forceN: number; timeS: number };
+  /** The fall below the running maximum that counts as a slip, N: the detection's threshold, not a measured drop. */
+  dropN: number;
 }
 
 const W = 720;
 const H = 320;
 const M = { left: 64, right: 16, top: 16, bottom: 44 };
 
-/** Force against time of a load-cell pull, with the detected slip onset (or the held-to maximum) marked. */
-export function TraceChart({ time, force, unit, onset }: TraceChartProps) {
+/** Force against time of a load-cell pull in the crew's force unit, with the detected slip onset (or the held-to maximum) marked. */
+export function TraceChart({ time, force, units, onset, dropN }: TraceChartProps) {
+  const unit = forceUnitOf(units);
   const values = force.map((f) => fromNewtons(f, unit));
   const top = Math.max(...values, 0);
   const bottom = Math.min(...values, 0);
@@ -23,21 +28,22 @@ export function TraceChart({ time, force, unit, onset }: TraceChartProps) {
   const y = linearScale([bottom, top * 1.05], [H - M.bottom, M.top]);
   const path = values.map((v, i) => `${i ? "L" : "M"}${x(time[i]).toFixed(1)},${y(v).toFixed(1)}`).join("");
   const onsetValue = fromNewtons(onset.forceN, unit);
-  const label = `${onset.kind === "slipped" ? "Slip onset" : "Held to"} ${formatForce(onset.forceN, unit)} at ${onset.timeS.toFixed(1)} s`;
+  const load = capacityText(onset.forceN, units);
+  const label = `${onset.kind === "slipped" ? `Slip onset ${load}` : slipResultText("held", load, true)} at ${onset.timeS.toFixed(1)} s`;
   return (
     <figure className="rounded-panel border border-ink-200 bg-white p-2">
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={`Trace chart: force against time. ${label}.`} className="h-auto w-full">
-        {niceTicks(bottom, top * 1.05).map((t) => (
-          <g key={`y${t}`}>
-            <line x1={M.left} x2={W - M.right} y1={y(t)} y2={y(t)} stroke="#e6eaef" />
-            <text x={M.left - 6} y={y(t) + 4} textAnchor="end" fontSize="12" fill="#3a485a">
-              {t}
+        {axisTicks(bottom, top * 1.05).map((t) => (
+          <g key={`y${t.text}`}>
+            <line x1={M.left} x2={W - M.right} y1={y(t.value)} y2={y(t.value)} stroke="#e6eaef" />
+            <text x={M.left - 6} y={y(t.value) + 4} textAnchor="end" fontSize="12" fill="#3a485a">
+              {t.text}
             </text>
           </g>
         ))}
-        {niceTicks(time[0], time[time.length - 1]).map((t) => (
-          <text key={`x${t}`} x={x(t)} y={H - M.bottom + 18} textAnchor="middle" fontSize="12" fill="#3a485a">
-            {t}
+        {axisTicks(time[0], time[time.length - 1]).map((t) => (
+          <text key={`x${t.text}`} x={x(t.value)} y={H - M.bottom + 18} textAnchor="middle" fontSize="12" fill="#3a485a">
+            {t.text}
           </text>
         ))}
         <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle" fontSize="13" fill="#1d2632">
@@ -63,8 +69,8 @@ export function TraceChart({ time, force, unit, onset }: TraceChartProps) {
       <figcaption className="px-2 pb-1 text-sm text-ink-600">
         {label}.{" "}
         {onset.kind === "held"
-          ? "No drop big enough to count as a slip: the slip load is at least this."
-          : "The first drop beyond the set amount below the running maximum."}
+          ? `No fall of more than ${capacityText(dropN, units)} below the running maximum while the pull went on: the slip load is at least this.`
+          : `The first fall of more than ${capacityText(dropN, units)} (the set threshold) below the running maximum while the pull went on.`}
       </figcaption>
     </figure>
   );

@@ -1,13 +1,23 @@
 import Link from "next/link";
 import { cellKey, type SlipTable } from "@/lib/slip-table";
-import { formatForce } from "@/lib/force-format";
+import { capacityText, ropeDiameterText } from "@/lib/figures";
+import type { UnitSystem } from "@/lib/rig-form/quantities";
 
 /**
  * Devices down, rope diameters across. A cell gives the lowest slip load with the number of tests and
  * the spread of the slips; a cell with only held-to results gives "held to ≥ F", a lower bound, never a slip.
- * Loads are cut down to 0.01 kN, never rounded up.
+ * Loads are in the crew's unit, cut down at the shown precision, never rounded up.
  */
-export function SlipTableMatrix({ table, cellHref }: { table: SlipTable; cellHref?: (deviceId: string, diameter: number) => string }) {
+export function SlipTableMatrix({
+  table,
+  units,
+  cellHref,
+}: {
+  table: SlipTable;
+  units: UnitSystem;
+  cellHref?: (deviceId: string, diameter: number) => string;
+}) {
+  const load = (newtons: number) => capacityText(newtons, units);
   const cells = new Map(table.cells.map((c) => [cellKey(c.deviceId, c.ropeDiameterMm), c]));
   return (
     // Focusable so that a keyboard can scroll the matrix when it is wider than the screen.
@@ -21,7 +31,7 @@ export function SlipTableMatrix({ table, cellHref }: { table: SlipTable; cellHre
             </th>
             {table.diameters.map((d) => (
               <th key={d} scope="col" className="px-4 py-2 text-right">
-                {d.toFixed(1)} mm
+                {ropeDiameterText(d)}
               </th>
             ))}
           </tr>
@@ -44,14 +54,14 @@ export function SlipTableMatrix({ table, cellHref }: { table: SlipTable; cellHre
                 }
                 const main =
                   cell.lowestSlipN !== null ? (
-                    <span className="font-semibold">{formatForce(cell.lowestSlipN, "kN")}</span>
+                    <span className="font-semibold">{load(cell.lowestSlipN)}</span>
                   ) : (
-                    <span className="font-semibold text-caution-800">held to ≥ {formatForce(cell.highestHeldN!, "kN")}</span>
+                    <span className="font-semibold text-caution-800">held to ≥ {load(cell.highestHeldN!)}</span>
                   );
                 const detail = [
                   `${cell.tests} test${cell.tests === 1 ? "" : "s"}`,
-                  cell.spreadN !== null ? `spread ${formatForce(cell.spreadN, "kN")}` : null,
-                  cell.lowestSlipN !== null && cell.highestHeldN !== null ? `held to ${formatForce(cell.highestHeldN, "kN")}` : null,
+                  cell.spreadN !== null ? `spread ${load(cell.spreadN)}` : null,
+                  cell.lowestSlipN !== null && cell.highestHeldN !== null ? `held to ${load(cell.highestHeldN)}` : null,
                 ]
                   .filter(Boolean)
                   .join(" · ");
@@ -66,7 +76,7 @@ export function SlipTableMatrix({ table, cellHref }: { table: SlipTable; cellHre
                     {cellHref ? (
                       <Link
                         href={cellHref(device.id, d)}
-                        aria-label={`${device.name} on ${d.toFixed(1)} mm: ${cell.lowestSlipN !== null ? `lowest slip ${formatForce(cell.lowestSlipN, "kN")}` : `held to at least ${formatForce(cell.highestHeldN!, "kN")}`}, ${detail}`}
+                        aria-label={`${device.name} on ${ropeDiameterText(d)}: ${cell.lowestSlipN !== null ? `lowest slip ${load(cell.lowestSlipN)}` : `held to at least ${load(cell.highestHeldN!)}`}, ${detail}`}
                         className="block no-underline"
                       >
                         {content}

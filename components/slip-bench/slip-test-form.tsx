@@ -11,9 +11,20 @@ import { Field, FieldFrame, controlClasses } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { useToast } from "@/components/ui/toast";
 import { TraceChart } from "@/components/charts/trace-chart";
-import { forceIn, formatForce } from "@/lib/force-format";
+import { forceIn } from "@/lib/force-format";
+import { capacityText, forceUnitOf } from "@/lib/figures";
+import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { TraceAnalysis } from "@/lib/trace-analysis";
-import { DEFAULT_DROP, FORCE_UNITS, SLIP_RESULTS, SLIP_RESULT_LABELS, SlipTestSchema, type SlipTest, type SlipTestInput } from "@/lib/validations/slip-tests";
+import {
+  DEFAULT_DROP,
+  FORCE_UNITS,
+  SLIP_RESULTS,
+  SLIP_RESULT_LABELS,
+  SlipTestSchema,
+  slipResultText,
+  type SlipTest,
+  type SlipTestInput,
+} from "@/lib/validations/slip-tests";
 import type { ForceUnit } from "@/physics";
 
 export interface DeviceOption {
@@ -32,16 +43,17 @@ const unitOptions = FORCE_UNITS.map((u) => ({ value: u, label: u }));
  * Records a slip test. With a trace, the server reads it and runs the engine's slip detection first;
  * the detected value fills the result, and the tester confirms it or corrects it (saying why) before saving.
  */
-export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; ropes: RopeOption[] }) {
+export function SlipTestForm({ devices, ropes, units }: { devices: DeviceOption[]; ropes: RopeOption[]; units: UnitSystem }) {
   const router = useRouter();
   const notify = useToast();
   const [traceError, setTraceError] = useState<string | null>(null);
   const [reading, setReading] = useState(false);
-  const [traceUnit, setTraceUnit] = useState<ForceUnit>("kN");
+  const crewUnit = forceUnitOf(units);
+  const [traceUnit, setTraceUnit] = useState<ForceUnit>(crewUnit);
   const [analysis, setAnalysis] = useState<TraceAnalysis | null>(null);
   const { form, submit, formError } = useApiForm<SlipTestInput, SlipTest>(SlipTestSchema, {
     url: "/api/slip-tests",
-    defaultValues: { deviceModelId: devices[0]?.id, result: "slipped", forceUnit: "kN", testedOn: new Date().toISOString().slice(0, 10), notes: "" },
+    defaultValues: { deviceModelId: devices[0]?.id, result: "slipped", forceUnit: crewUnit, testedOn: new Date().toISOString().slice(0, 10), notes: "" },
     onSuccess: () => {
       notify({ title: "Slip test saved", description: "The slip table now includes it.", tone: "ok" });
       router.push("/slip-bench");
@@ -66,10 +78,12 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
     }
     const found = answer.body.analysis as TraceAnalysis;
     setAnalysis(found);
-    setValue("traceUploadId", (answer.body.upload as { id: string }).id);
-    setValue("result", found.onset.kind);
-    setValue("force", forceIn(found.onset.forceN, found.unit));
-    setValue("forceUnit", found.unit);
+    // The trace fills these fields: validating them again clears any message left from an earlier attempt.
+    const filled = { shouldValidate: formState.isSubmitted };
+    setValue("traceUploadId", (answer.body.upload as { id: string }).id, filled);
+    setValue("result", found.onset.kind, filled);
+    setValue("forceUnit", found.unit, filled);
+    setValue("force", forceIn(found.onset.forceN, found.unit), filled);
   }
 
   return (
@@ -98,11 +112,11 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
           />
           <Field
             key={traceUnit}
-            label={`Drop that counts as a slip (${traceUnit})`}
+            label={`Fall that counts as a slip (${traceUnit})`}
             name="drop"
             inputMode="decimal"
             defaultValue={DEFAULT_DROP[traceUnit]}
-            hint="A fall this far below the running maximum, while the pull goes on, marks the slip."
+            hint="The threshold, not a measurement: the first fall of more than this below the running maximum, while the pull goes on, marks the slip."
           />
           <Field
             label="Pull ended at (s), optional"
@@ -116,17 +130,17 @@ export function SlipTestForm({ devices, ropes }: { devices: DeviceOption[]; rope
             </Button>
           </div>
           <div className="md:col-span-3">
-            <FormError message={traceError} />
+            <FormError message={traceError ?? errors.traceUploadId?.message} />
           </div>
         </form>
         {analysis ? (
           <div className="space-y-2">
-            <TraceChart time={analysis.chart.time} force={analysis.chart.force} unit={analysis.unit} onset={analysis.onset} />
+            <TraceChart time={analysis.chart.time} force={analysis.chart.force} units={units} onset={analysis.onset} dropN={analysis.dropN} />
             <p>
               Read {analysis.rows.toLocaleString("en")} rows over {analysis.durationS.toFixed(1)} s (time from “{analysis.timeColumn}”, force from “
               {analysis.forceColumn}”).{" "}
               <strong>
-                Detected: {analysis.onset.kind === "slipped" ? "slipped at" : "held to"} {formatForce(analysis.onset.forceN, analysis.unit)}
+                Detected: {slipResultText(analysis.onset.kind, capacityText(analysis.onset.forceN, units))}
               </strong>
               . Check it against the chart, then confirm it below or correct it and say why in the notes.
             </p>

@@ -3,13 +3,15 @@
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
 import { SortableTable } from "@/components/ui/sortable-table";
-import { formatForce } from "@/lib/force-format";
+import { capacityText, ropeDiameterText } from "@/lib/figures";
+import type { UnitSystem } from "@/lib/rig-form/quantities";
+import { slipResultText } from "@/lib/validations/slip-tests";
 import { isCorrection } from "@/lib/slip-table";
 import type { SlipTestRow } from "@/db/slip-tests";
 
 const detectedOf = (t: SlipTestRow) => (t.detectedResult ? { kind: t.detectedResult, forceN: t.detectedForceN! } : null);
 
-export function SlipTestList({ tests }: { tests: SlipTestRow[] }) {
+export function SlipTestList({ tests, units }: { tests: SlipTestRow[]; units: UnitSystem }) {
   const devices = [...new Map(tests.map((t) => [t.deviceId, t.deviceName]))].map(([value, label]) => ({ value, label }));
   return (
     <SortableTable
@@ -36,14 +38,14 @@ export function SlipTestList({ tests }: { tests: SlipTestRow[] }) {
           key: "rope",
           header: "Rope",
           sortBy: (t) => t.ropeDiameterMm,
-          cell: (t) => `${t.ropeDiameterMm.toFixed(1)} mm${t.ropeModelName ? ` (${t.ropeModelName})` : ""}`,
+          cell: (t) => `${ropeDiameterText(t.ropeDiameterMm)}${t.ropeModelName ? ` (${t.ropeModelName})` : ""}`,
         },
         {
           key: "result",
           header: "Result",
           sortBy: (t) => t.forceN,
           align: "right",
-          cell: (t) => `${t.result === "slipped" ? "slipped at" : "held to"} ${formatForce(t.forceN, t.forceUnit)}`,
+          cell: (t) => slipResultText(t.result, capacityText(t.forceN, units)),
         },
         { key: "trace", header: "Trace", cell: (t) => (t.traceUploadId ? (isCorrection(detectedOf(t), t.result, t.forceN) ? "corrected" : "confirmed") : "—") },
         { key: "who", header: "Who", sortBy: (t) => t.testerName, cell: (t) => t.testerName },

@@ -7,7 +7,15 @@ import { pastDate } from "./kit";
 export const FORCE_UNITS = ["N", "kN", "lbf", "kgf"] as const satisfies readonly ForceUnit[];
 export const SLIP_RESULTS = ["slipped", "held"] as const;
 export type SlipOutcome = (typeof SLIP_RESULTS)[number];
+/** How a result reads before its force, everywhere it is written: "slipped at 7.40 kN", "held to 9.00 kN". */
+export const SLIP_RESULT_WORDS: Record<SlipOutcome, string> = { slipped: "slipped at", held: "held to" };
+/** The result as the form offers it. */
 export const SLIP_RESULT_LABELS: Record<SlipOutcome, string> = { slipped: "Slipped at", held: "Held to (no slip)" };
+/** A result with its force: "slipped at 7.40 kN"; `capital` for the start of a sentence. */
+export function slipResultText(result: SlipOutcome, force: string, capital = false): string {
+  const words = SLIP_RESULT_WORDS[result];
+  return `${capital ? words[0].toUpperCase() + words.slice(1) : words} ${force}`;
+}
 
 /**
  * The forces a slip bench for slackline brakes and line grips measures: 0.1 kN to 50 kN (common practice,

@@ -12,6 +12,7 @@ import { PublishLink } from "@/components/slip-bench/publish-link";
 import { authorizePage } from "@/lib/authz";
 import { can } from "@/lib/roles";
 import { buildSlipTable } from "@/lib/slip-table";
+import { forceUnitOf, ropeDiameterText } from "@/lib/figures";
 import { isUuid } from "@/lib/validations/ids";
 import { listSlipTests, slipTableLinkOf } from "@/db/slip-tests";
 
@@ -52,26 +53,26 @@ export default async function SlipBenchPage({ searchParams }: { searchParams: Pr
             <div className="flex flex-wrap items-end justify-between gap-3">
               <h2 id="table-heading">Slip table</h2>
               <a href="/api/slip-table?format=csv" className={buttonClasses("secondary")} download>
-                Download table as CSV
+                Download table as CSV ({forceUnitOf(crew.units)})
               </a>
             </div>
             <p className="max-w-prose text-ink-600">
               Each cell: the lowest load at which the device slipped on that rope, the number of tests and the spread of the slips. “Held to ≥” means no test
-              slipped: the slip load is at least that, and was never measured. Loads are cut down to 0.01 kN, never rounded up.
+              slipped: the slip load is at least that, and was never measured. Loads are in {forceUnitOf(crew.units)}, cut down, never rounded up.
             </p>
-            <SlipTableMatrix table={table} cellHref={(id, d) => `/slip-bench?device=${id}&diameter=${d}#tests-heading`} />
+            <SlipTableMatrix table={table} units={crew.units} cellHref={(id, d) => `/slip-bench?device=${id}&diameter=${d}#tests-heading`} />
           </section>
           <section aria-labelledby="chart-heading" className="space-y-3">
             <h2 id="chart-heading">Slip load against rope diameter</h2>
             <div className="rounded-panel border border-ink-200 bg-white p-2">
-              <SlipLoadChart id="slip-load-chart" tests={tests} devices={table.devices} />
+              <SlipLoadChart id="slip-load-chart" tests={tests} devices={table.devices} units={crew.units} />
             </div>
             <ChartExport chartId="slip-load-chart" fileName="slip-load-by-diameter" />
           </section>
           <section aria-labelledby="tests-heading" className="space-y-3">
-            <h2 id="tests-heading">{chosenName ? `Tests of ${chosenName} on ${Number(diameter).toFixed(1)} mm` : "All slip tests"}</h2>
+            <h2 id="tests-heading">{chosenName ? `Tests of ${chosenName} on ${ropeDiameterText(Number(diameter))}` : "All slip tests"}</h2>
             {chosenName ? <Link href="/slip-bench#tests-heading">Show all tests</Link> : null}
-            <SlipTestList key={`${device}-${diameter}`} tests={shownTests} />
+            <SlipTestList key={`${device}-${diameter}`} tests={shownTests} units={crew.units} />
           </section>
           {can(role, "slip.publish") ? (
             <section aria-labelledby="share-heading" className="space-y-3">

@@ -7,7 +7,7 @@ import { listSlipTests } from "@/db/slip-tests";
 export const GET = crewRoute("slip.read", async ({ crew }, request) => {
   const table = buildSlipTable(await listSlipTests(crew.id));
   if (request.nextUrl.searchParams.get("format") !== "csv") return NextResponse.json({ table });
-  return new Response(slipTableCsv(table), {
+  return new Response(slipTableCsv(table, crew.units), {
     headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": 'attachment; filename="slip-table.csv"' },
   });
 });

@@ -74,13 +74,26 @@ describe("buildSlipTable", () => {
   });
 
   it("exports one CSV row per cell, with held-only cells giving their bound and no slip load", () => {
-    expect(slipTableCsv(table).split("\r\n")).toEqual([
+    expect(slipTableCsv(table, "si").split("\r\n")).toEqual([
       "device,rope_diameter_mm,tests,slips,lowest_slip_kN,slip_spread_kN,held_to_at_least_kN",
       '"Alpha cam",10.5,3,2,7.40,0.50,9.00',
       '"Alpha cam",11.0,1,0,,,6.00',
       '"Beta grip",11.0,2,0,,,5.50',
       "",
     ]);
+  });
+
+  it("exports a US crew's table in whole lbf, cut down, with the unit in each force column's name", () => {
+    // 1 lbf = 4.448 221 615 260 5 N (NIST SP 811, appendix B), worked out here apart from the app's converter.
+    const lbf = (newtons: number) => String(Math.floor(newtons / 4.4482216152605));
+    expect(slipTableCsv(table, "us").split("\r\n")).toEqual([
+      "device,rope_diameter_mm,tests,slips,lowest_slip_lbf,slip_spread_lbf,held_to_at_least_lbf",
+      `"Alpha cam",10.5,3,2,${lbf(7400)},${lbf(500)},${lbf(9000)}`,
+      `"Alpha cam",11.0,1,0,,,${lbf(6000)}`,
+      `"Beta grip",11.0,2,0,,,${lbf(5500)}`,
+      "",
+    ]);
+    expect(lbf(7400)).toBe("1663");
   });
 });
 

@@ -57,7 +57,13 @@ describe("parseTraceCsv", () => {
 
   it("refuses a file with no numeric force column", () => {
     expect(refusal("time,comment\n0,start\n1,pulling\n")).toMatch(/no numeric force column/);
-    expect(refusal("time\n0\n1\n")).toMatch(/no force column/);
+    expect(refusal("time\n0\n1\n")).toBe('The header "time" has only a time column: a trace needs a force column beside it.');
+  });
+
+  it("tells a trace without a time column that the time is missing, not the force", () => {
+    expect(refusal("force (N)\n0\n10\n")).toBe('The header "force (N)" has only a force column: a trace needs a time column (in seconds) beside it.');
+    expect(refusal("reading\n0\n10\n")).toBe('The header "reading" has only one column: a trace needs a time column (in seconds) and a force column.');
+    expect(refusal("0\n10\n")).toBe("Row 1 has 1 field; expected at least 2 (time and force) separated by commas.");
   });
 
   it("refuses a force unit that contradicts the header", () => {

@@ -29,6 +29,7 @@ export default async function NewSlipTestPage() {
         <SlipTestForm
           devices={devices.map((d) => ({ id: d.id, name: d.name }))}
           ropes={ropes.map((r) => ({ id: r.id, name: r.name, diameterMm: (r.specs as GearSpecs<"rope">).diameterMm }))}
+          units={crew.units}
         />
       )}
     </>

@@ -4,6 +4,7 @@ import { Caution } from "@/components/caution-notice";
 import { SlipLoadChart } from "@/components/charts/slip-load-chart";
 import { SlipTableMatrix } from "@/components/slip-bench/slip-table-matrix";
 import { buildSlipTable } from "@/lib/slip-table";
+import { forceUnitOf } from "@/lib/figures";
 import { hashToken } from "@/lib/tokens";
 import { crewOfSlipTableLink, listSlipTests } from "@/db/slip-tests";
 
@@ -30,16 +31,16 @@ export default async function SharedSlipTablePage({ params }: { params: Promise<
         <h1>Slip table of {crew.name}</h1>
         <p className="mt-1 max-w-prose text-ink-600">
           Shared read-only by the crew. Each cell gives the lowest load at which the device slipped on that rope diameter; “held to ≥” is a lower bound: no test
-          slipped. Loads are cut down to 0.01 kN, never rounded up.
+          slipped. Loads are in {forceUnitOf(crew.units)}, cut down, never rounded up.
         </p>
       </header>
       {tests.length === 0 ? (
         <p>No slip tests yet.</p>
       ) : (
         <>
-          <SlipTableMatrix table={table} />
+          <SlipTableMatrix table={table} units={crew.units} />
           <div className="rounded-panel border border-ink-200 bg-white p-2">
-            <SlipLoadChart id="shared-slip-load-chart" tests={tests} devices={table.devices} />
+            <SlipLoadChart id="shared-slip-load-chart" tests={tests} devices={table.devices} units={crew.units} />
           </div>
         </>
       )}
