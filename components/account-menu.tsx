@@ -18,7 +18,7 @@ export function AccountMenu({ name, role }: { name: string; role: string | null 
         {name}
         {role ? <span className="ml-1 font-normal text-ink-500">({role})</span> : null}
       </Link>
-      <Button tone="quiet" className="text-sm" onClick={signOut}>
+      <Button tone="quiet" className="whitespace-nowrap px-3 text-sm" onClick={signOut}>
         Sign out
       </Button>
     </div>

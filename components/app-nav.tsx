@@ -16,8 +16,9 @@ export const APP_SECTIONS = [
 export function AppNav() {
   const pathname = usePathname();
   return (
-    <nav aria-label="Sections" className="overflow-x-auto">
-      <ul className="flex gap-1 md:flex-col">
+    // On a phone the tabs wrap onto a second row rather than run off the screen.
+    <nav aria-label="Sections">
+      <ul className="flex flex-wrap gap-1 md:flex-col">
         {APP_SECTIONS.map((section) => {
           const current = pathname === section.href || pathname.startsWith(`${section.href}/`);
           return (
@@ -26,7 +27,7 @@ export function AppNav() {
                 href={section.href}
                 aria-current={current ? "page" : undefined}
                 className={classNames(
-                  "flex min-h-target items-center whitespace-nowrap rounded-control px-4 font-semibold no-underline hover:no-underline",
+                  "flex min-h-target items-center whitespace-nowrap rounded-control px-3 font-semibold no-underline hover:no-underline md:px-4",
                   current ? "bg-spruce-700 text-white" : "text-ink-700 hover:bg-ink-100",
                 )}
               >

@@ -58,11 +58,10 @@ export function MembersTable({ members, selfId, canManage }: { members: MemberRo
         {
           key: "actions",
           header: "Actions",
+          wrap: true,
           cell: (m) =>
             m.userId === onlyOwner && m.userId === selfId ? (
-              <span className="block max-w-xs text-sm text-ink-600">
-                You are the crew&apos;s only owner: make someone else an owner before you leave or step down.
-              </span>
+              <span className="text-sm text-ink-600">You are the crew&apos;s only owner: make someone else an owner before you leave or step down.</span>
             ) : m.userId === selfId ? (
               <ConfirmButton
                 tone="secondary"

@@ -13,6 +13,8 @@ import { Select } from "@/components/ui/select";
 import {
   GEAR_KINDS,
   GEAR_KIND_LABELS,
+  CONSTRUCTIONS,
+  CONSTRUCTION_LABELS,
   GearModelSchema,
   SPEC_KEYS,
   measureLabel,
@@ -154,10 +156,7 @@ export function GearModelForm({ model, units }: GearModelFormProps) {
               <Select
                 key={key}
                 label="Construction"
-                options={[
-                  { value: "static", label: "Static (low stretch)" },
-                  { value: "dynamic", label: "Dynamic (climbing rope)" },
-                ]}
+                options={CONSTRUCTIONS.map((c) => ({ value: c, label: CONSTRUCTION_LABELS[c] }))}
                 error={errorAt(errors, "specs.construction")}
                 {...register("specs.construction")}
               />

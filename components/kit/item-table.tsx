@@ -51,6 +51,7 @@ export function ItemTable({ items, showModel = true }: { items: GearItemRow[]; s
               {
                 key: "model",
                 header: "Model",
+                wrap: true,
                 sortBy: (i: GearItemRow) => i.modelName,
                 cell: (i: GearItemRow) => `${i.modelName} (${GEAR_KIND_LABELS[i.kind]})`,
               },
@@ -60,6 +61,7 @@ export function ItemTable({ items, showModel = true }: { items: GearItemRow[]; s
         {
           key: "inspected",
           header: "Last inspection",
+          wrap: true,
           sortBy: (i) => i.lastInspectedOn,
           cell: (i) => (i.lastInspectedOn ? `${i.lastInspectedOn}: ${INSPECTION_RESULT_LABELS[i.lastResult!]}` : "Never inspected"),
         },

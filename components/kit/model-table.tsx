@@ -17,7 +17,7 @@ export function ModelTable({ models, units }: { models: GearModelRow[]; units: U
       caption="Gear models"
       rows={models}
       rowKey={(m) => m.id}
-      searchText={(m) => `${m.name} ${GEAR_KIND_LABELS[m.kind]} ${m.notes} ${specSummary(m.specs, units)}`}
+      searchText={(m) => `${m.name} ${GEAR_KIND_LABELS[m.kind]} ${m.notes} ${specSummary(m.kind, m.specs, units)}`}
       filters={[
         { label: "Kind", options: GEAR_KINDS.map((k) => ({ value: k, label: GEAR_KIND_LABELS[k] })), valueOf: (m) => m.kind },
         {
@@ -34,6 +34,7 @@ export function ModelTable({ models, units }: { models: GearModelRow[]; units: U
         {
           key: "name",
           header: "Model",
+          wrap: true,
           sortBy: (m) => m.name,
           cell: (m) => (
             <Link href={`/kit/models/${m.id}`} className="font-semibold">
@@ -42,7 +43,7 @@ export function ModelTable({ models, units }: { models: GearModelRow[]; units: U
           ),
         },
         { key: "kind", header: "Kind", sortBy: (m) => GEAR_KIND_LABELS[m.kind], cell: (m) => GEAR_KIND_LABELS[m.kind] },
-        { key: "specs", header: "Specs", cell: (m) => specSummary(m.specs, units) },
+        { key: "specs", header: "Specs", wrap: true, cell: (m) => specSummary(m.kind, m.specs, units) },
         {
           key: "mbs",
           header: "MBS",

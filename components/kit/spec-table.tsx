@@ -1,11 +1,11 @@
 import { stretchTensionDigits } from "@/lib/figures";
 import { unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
-import { measureLabel, type GearSpecs, type MeasureKey, type StretchPointInput } from "@/lib/validations/kit";
-import { specText } from "./spec-summary";
+import { measureLabel, type GearKind, type GearSpecs, type MeasureKey, type StretchPointInput } from "@/lib/validations/kit";
+import { constructionText, specEntries, specText } from "./spec-summary";
 
 /** A model's specs as a definition list in the crew's units, stretch points as a small table. */
-export function SpecTable({ specs, units }: { specs: GearSpecs; units: UnitSystem }) {
-  const entries = Object.entries(specs);
+export function SpecTable({ kind, specs, units }: { kind: GearKind; specs: GearSpecs; units: UnitSystem }) {
+  const entries = specEntries(kind, specs);
   if (entries.length === 0) return <p className="text-ink-600">No specs recorded.</p>;
   return (
     <dl className="grid max-w-2xl grid-cols-[auto_1fr] gap-x-6 gap-y-2 rounded-panel border border-ink-200 bg-white p-4">
@@ -44,7 +44,7 @@ export function SpecTable({ specs, units }: { specs: GearSpecs; units: UnitSyste
             <dt key={`${key}-t`} className="font-semibold">
               Construction
             </dt>,
-            <dd key={`${key}-d`}>{String(value)}</dd>,
+            <dd key={`${key}-d`}>{constructionText(value)}</dd>,
           ];
         }
         return [

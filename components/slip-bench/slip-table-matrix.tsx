@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { ScrollFrame } from "@/components/ui/scroll-frame";
 import { cellKey, type SlipTable } from "@/lib/slip-table";
 import { capacityText, ropeDiameterText } from "@/lib/figures";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
@@ -20,8 +21,7 @@ export function SlipTableMatrix({
   const load = (newtons: number) => capacityText(newtons, units);
   const cells = new Map(table.cells.map((c) => [cellKey(c.deviceId, c.ropeDiameterMm), c]));
   return (
-    // Focusable so that a keyboard can scroll the matrix when it is wider than the screen.
-    <div tabIndex={0} role="region" aria-label="Slip table" className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel">
+    <ScrollFrame label="Slip table">
       <table className="min-w-full text-sm">
         <caption className="sr-only">Slip table: lowest slip load by device and rope diameter</caption>
         <thead className="bg-ink-100 text-ink-700">
@@ -91,6 +91,6 @@ export function SlipTableMatrix({
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollFrame>
   );
 }

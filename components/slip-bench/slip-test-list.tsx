@@ -37,6 +37,7 @@ export function SlipTestList({ tests, units }: { tests: SlipTestRow[]; units: Un
         {
           key: "rope",
           header: "Rope",
+          wrap: true,
           sortBy: (t) => t.ropeDiameterMm,
           cell: (t) => `${ropeDiameterText(t.ropeDiameterMm)}${t.ropeModelName ? ` (${t.ropeModelName})` : ""}`,
         },

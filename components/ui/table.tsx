@@ -1,4 +1,6 @@
 import type { ReactNode } from "react";
+import { classNames } from "@/lib/class-names";
+import { ScrollFrame } from "./scroll-frame";
 
 export interface Column<Row> {
   key: string;
@@ -9,6 +11,8 @@ export interface Column<Row> {
   headerContent?: ReactNode;
   /** The column the rows are sorted by, announced to screen readers. */
   sorted?: "ascending" | "descending";
+  /** Long text (specs, notes, names) that wraps within a readable width; other columns keep each value on one line. */
+  wrap?: boolean;
 }
 
 interface TableProps<Row> {
@@ -18,24 +22,19 @@ interface TableProps<Row> {
   rowKey: (row: Row) => string;
 }
 
-/**
- * A data table that scrolls sideways on a phone instead of squeezing its columns; the scrolling
- * frame takes focus, so the arrow keys scroll it too.
- */
+const cellClasses = (c: Column<unknown>) =>
+  classNames(c.align === "right" && "text-right tabular-nums", c.wrap ? "min-w-[12rem] max-w-[24rem]" : "whitespace-nowrap");
+
+/** A data table that scrolls sideways on a phone, with a hint while columns are out of sight, instead of squeezing its columns. */
 export function Table<Row>({ caption, columns, rows, rowKey }: TableProps<Row>) {
   return (
-    <div
-      tabIndex={0}
-      role="region"
-      aria-label={`${caption}, scrolls sideways`}
-      className="overflow-x-auto rounded-panel border border-ink-200 bg-white shadow-panel"
-    >
+    <ScrollFrame label={caption}>
       <table className="min-w-full text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-ink-100 text-ink-700">
           <tr>
             {columns.map((c) => (
-              <th key={c.key} scope="col" aria-sort={c.sorted} className={`px-4 py-3 font-semibold ${c.align === "right" ? "text-right" : ""}`}>
+              <th key={c.key} scope="col" aria-sort={c.sorted} className={classNames("px-4 py-3 font-semibold", cellClasses(c as Column<unknown>))}>
                 {c.headerContent ?? c.header}
               </th>
             ))}
@@ -45,7 +44,7 @@ export function Table<Row>({ caption, columns, rows, rowKey }: TableProps<Row>) 
           {rows.map((row) => (
             <tr key={rowKey(row)}>
               {columns.map((c) => (
-                <td key={c.key} className={`px-4 py-3 align-top ${c.align === "right" ? "text-right tabular-nums" : ""}`}>
+                <td key={c.key} className={classNames("px-4 py-3 align-top", cellClasses(c as Column<unknown>))}>
                   {c.cell(row)}
                 </td>
               ))}
@@ -53,6 +52,6 @@ export function Table<Row>({ caption, columns, rows, rowKey }: TableProps<Row>) 
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollFrame>
   );
 }

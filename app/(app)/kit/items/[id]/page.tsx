@@ -61,7 +61,7 @@ export default async function GearItemPage({ params }: { params: Promise<{ id: s
                 { key: "on", header: "Date", cell: (r) => r.inspectedOn },
                 { key: "who", header: "Who", cell: (r) => r.inspectorName },
                 { key: "result", header: "Result", cell: (r) => INSPECTION_RESULT_LABELS[r.result] },
-                { key: "notes", header: "Notes", cell: (r) => r.notes },
+                { key: "notes", header: "Notes", wrap: true, cell: (r) => r.notes },
               ]}
             />
           ) : (
