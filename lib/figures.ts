@@ -1,4 +1,4 @@
-import type { ForceUnit } from "@/physics";
+import { fromNewtons, type ForceUnit } from "@/physics";
 import { forceDigits, formatForce } from "./force-format";
 import { toShown, type UnitSystem } from "./rig-form/quantities";
 
@@ -16,6 +16,12 @@ export const capacityInUnit = (newtons: number, unit: ForceUnit) => formatForce(
 
 /** The digits of `capacityText`, without the unit: for a CSV column or an input box. */
 export const capacityDigits = (newtons: number, units: UnitSystem) => forceDigits(newtons, forceUnitOf(units));
+
+/** A setting given as a force (the fall that counts as a slip), to the nearest shown step: it is neither a load nor a capacity. */
+export const thresholdText = (newtons: number, units: UnitSystem) => {
+  const unit = forceUnitOf(units);
+  return `${fromNewtons(newtons, unit).toFixed(unit === "kN" ? 2 : 0)} ${unit}`;
+};
 
 /** A number as it was given, without binary-fraction noise: 0.1 + 0.2 reads 0.3. */
 export const asGiven = (value: number) => String(Number(value.toPrecision(6)));

@@ -1,4 +1,6 @@
 // `npm start`: sets up and runs the whole product on this machine; Ctrl-C stops all it started.
+// `npm run dev` (`start --dev`): the same stack (PostgreSQL, the S3 and SMTP fakes, migrations, the demo seed
+// into an empty database) with `next dev`, which reloads as files change, instead of a production build.
 import { startStack, type RunningStack } from "./services/stack";
 import { buildApp, serveApp, type AppServer } from "./services/app-server";
 import { StackError } from "./services/fail";
@@ -21,12 +23,19 @@ async function shutdown(code: number): Promise<never> {
 process.on("SIGINT", () => void shutdown(0));
 process.on("SIGTERM", () => void shutdown(0));
 
+const development = process.argv.includes("--dev");
+
 async function main() {
   stack = await startStack("dev");
-  await buildApp(stack.env);
-  server = await serveApp(stack.env, stack.settings.appPort);
+  if (development) {
+    // next dev needs the development mode, not the production one the stack sets for `next start`.
+    server = await serveApp({ ...stack.env, NODE_ENV: "development" }, stack.settings.appPort, "dev");
+  } else {
+    await buildApp(stack.env);
+    server = await serveApp(stack.env, stack.settings.appPort);
+  }
   console.log(`
-Spanwright is running at ${server.url}
+Spanwright${development ? " (development server, reloads as you edit)" : ""} is running at ${server.url}
   PostgreSQL 127.0.0.1:${stack.settings.pgPort} (database ${stack.settings.database}), S3 fake 127.0.0.1:${stack.settings.s3Port}, SMTP fake 127.0.0.1:${stack.settings.smtpPort}
   Demo sign-in (password ${DEMO_PASSWORD}):
 ${DEMO_PEOPLE.map((p) => `    ${p.role.padEnd(7)} ${p.email}`).join("\n")}

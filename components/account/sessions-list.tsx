@@ -10,7 +10,8 @@ import { callApi } from "@/components/forms/call-api";
 export interface SessionItem {
   handle: string;
   createdAt: string;
-  userAgent: string | null;
+  /** The browser and system, in words ("Safari 17 on an iPhone (iOS 17.4)"). */
+  device: string;
   current: boolean;
 }
 
@@ -34,12 +35,13 @@ export function SessionsList({ sessions }: { sessions: SessionItem[] }) {
         columns={[
           {
             key: "device",
-            header: "Browser",
+            header: "Device",
+            wrap: true,
             cell: (s) => (
-              <span className="break-all">
-                {s.userAgent ?? "Unknown browser"}
-                {s.current ? " (this device)" : ""}
-              </span>
+              <>
+                {s.device}
+                {s.current ? <strong> (this device)</strong> : null}
+              </>
             ),
           },
           { key: "since", header: "Signed in", cell: (s) => when(s.createdAt) },

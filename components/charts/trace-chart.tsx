@@ -1,4 +1,4 @@
-import { capacityText, forceUnitOf } from "@/lib/figures";
+import { capacityText, forceUnitOf, thresholdText } from "@/lib/figures";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import { slipResultText } from "@/lib/validations/slip-tests";
 import { fromNewtons } from "@/physics";
@@ -69,8 +69,8 @@ export function TraceChart({ time, force, units, onset, dropN }: TraceChartProps
       <figcaption className="px-2 pb-1 text-sm text-ink-600">
         {label}.{" "}
         {onset.kind === "held"
-          ? `No fall of more than ${capacityText(dropN, units)} below the running maximum while the pull went on: the slip load is at least this.`
-          : `The first fall of more than ${capacityText(dropN, units)} (the set threshold) below the running maximum while the pull went on.`}
+          ? `No fall of more than ${thresholdText(dropN, units)} below the running maximum while the pull went on: the slip load is at least this.`
+          : `The first fall of more than ${thresholdText(dropN, units)} (the set threshold) below the running maximum while the pull went on.`}
       </figcaption>
     </figure>
   );

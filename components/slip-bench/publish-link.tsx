@@ -38,11 +38,7 @@ export function PublishLink({ published }: { published: { createdAt: string; cre
       ) : (
         <p>No link is published.</p>
       )}
-      {url ? (
-        <p className="rounded-control bg-info-100 p-3 text-info-700">
-          Copy the link now; it is shown only once: <code className="break-all">{url}</code>
-        </p>
-      ) : null}
+      {url ? <OneTimeLink url={url} /> : null}
       <FormError message={error} />
       <div className="flex flex-wrap gap-2">
         <Button tone="secondary" onClick={publish}>
@@ -53,6 +49,33 @@ export function PublishLink({ published }: { published: { createdAt: string; cre
             Revoke the link
           </Button>
         ) : null}
+      </div>
+    </div>
+  );
+}
+
+/** The new link, shown once: a copy button, and the link itself selectable where the browser allows no clipboard. */
+function OneTimeLink({ url }: { url: string }) {
+  const [copied, setCopied] = useState<"yes" | "no" | null>(null);
+  async function copy() {
+    try {
+      await navigator.clipboard.writeText(url);
+      setCopied("yes");
+    } catch {
+      setCopied("no");
+    }
+  }
+  return (
+    <div className="space-y-2 rounded-control bg-info-100 p-3 text-info-700">
+      <p>Copy the link now: it is shown only once.</p>
+      <code className="block break-all">{url}</code>
+      <div className="flex flex-wrap items-center gap-3">
+        <Button tone="secondary" onClick={copy}>
+          Copy the link
+        </Button>
+        <span role="status">
+          {copied === "yes" ? "Copied." : copied === "no" ? "This browser would not copy it: select the link above and copy it by hand." : ""}
+        </span>
       </div>
     </div>
   );

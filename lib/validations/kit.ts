@@ -137,6 +137,9 @@ function stretchPoints(units: UnitSystem) {
 }
 export type StretchPointInput = { tensionKN: number; elongationPct: number };
 
+export const CONSTRUCTIONS = ["static", "dynamic"] as const;
+export const CONSTRUCTION_LABELS: Record<(typeof CONSTRUCTIONS)[number], string> = { static: "Static (low stretch)", dynamic: "Dynamic (climbing rope)" };
+
 const ropeRange = <T extends { minRopeMm: number; maxRopeMm: number }>(specs: T, ctx: z.RefinementCtx) => {
   if (specs.minRopeMm > specs.maxRopeMm) {
     ctx.addIssue({ code: "custom", path: ["maxRopeMm"], message: "The largest rope diameter cannot be below the smallest." });
@@ -152,7 +155,7 @@ function specSchemas(units: UnitSystem) {
     rope: z.object(
       {
         diameterMm: m("diameterMm"),
-        construction: z.enum(["static", "dynamic"], { error: "Choose static or dynamic." }),
+        construction: z.enum(CONSTRUCTIONS, { error: "Choose the construction: static or dynamic." }),
         mbsKN: m("mbsKN"),
         massPerMetreG: m("massPerMetreG"),
         stretchPoints: stretchPoints(units),

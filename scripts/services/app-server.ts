@@ -16,9 +16,12 @@ export interface AppServer {
   stop(): Promise<void>;
 }
 
-/** Serves the production build on 127.0.0.1 and waits until /api/health answers. */
-export async function serveApp(env: Record<string, string>, port: number): Promise<AppServer> {
-  const child: ChildProcess = spawn(nextBin, ["start", "-H", "127.0.0.1", "-p", String(port)], {
+/**
+ * Serves the app on 127.0.0.1 and waits until /api/health answers: the production build (`next start`), or
+ * the development server (`next dev`, which compiles each page on its first request).
+ */
+export async function serveApp(env: Record<string, string>, port: number, mode: "start" | "dev" = "start"): Promise<AppServer> {
+  const child: ChildProcess = spawn(nextBin, [mode, "-H", "127.0.0.1", "-p", String(port)], {
     cwd: projectDir,
     env: { ...process.env, ...env },
     stdio: ["ignore", "inherit", "inherit"],
@@ -30,7 +33,8 @@ export async function serveApp(env: Record<string, string>, port: number): Promi
     if (child.exitCode === null && child.signalCode === null) child.kill("SIGKILL");
   };
   const url = `http://127.0.0.1:${port}`;
-  const deadline = Date.now() + 60_000;
+  const seconds = mode === "dev" ? 180 : 60;
+  const deadline = Date.now() + seconds * 1000;
   while (Date.now() < deadline) {
     if (child.exitCode !== null) throw new StackError(`The web server exited at start (code ${child.exitCode}); see its output above.`);
     try {
@@ -42,5 +46,5 @@ export async function serveApp(env: Record<string, string>, port: number): Promi
     await new Promise((r) => setTimeout(r, 300));
   }
   await stop();
-  throw new StackError(`The web server did not answer ${url}/api/health within 60 s; see its output above.`);
+  throw new StackError(`The web server did not answer ${url}/api/health within ${seconds} s; see its output above.`);
 }

@@ -5,6 +5,7 @@ import { SessionsList } from "@/components/account/sessions-list";
 import { requireSignedIn } from "@/lib/auth/require-signed-in";
 import { sessionHandle } from "@/lib/tokens";
 import { sessionsOf } from "@/db/users";
+import { deviceName } from "@/lib/device-name";
 
 export const metadata: Metadata = { title: "Account" };
 
@@ -27,7 +28,12 @@ export default async function AccountPage() {
         <section aria-labelledby="devices" className="space-y-3">
           <h2 id="devices">Devices</h2>
           <SessionsList
-            sessions={sessions.map((s) => ({ handle: s.handle, createdAt: s.createdAt.toISOString(), userAgent: s.userAgent, current: s.handle === current }))}
+            sessions={sessions.map((s) => ({
+              handle: s.handle,
+              createdAt: s.createdAt.toISOString(),
+              device: deviceName(s.userAgent),
+              current: s.handle === current,
+            }))}
           />
         </section>
       </div>

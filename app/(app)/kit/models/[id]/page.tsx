@@ -59,7 +59,7 @@ export default async function GearModelPage({ params }: { params: Promise<{ id: 
         ) : null}
         <section aria-labelledby="specs-heading" className="space-y-3">
           <h2 id="specs-heading">Specs</h2>
-          <SpecTable specs={model.specs} units={crew.units} />
+          <SpecTable kind={model.kind} specs={model.specs} units={crew.units} />
           {model.notes ? <p className="max-w-prose whitespace-pre-line">{model.notes}</p> : null}
         </section>
         <section aria-labelledby="items-heading" className="space-y-3">

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { PageHeader } from "@/components/page-header";
 import { TraceChart } from "@/components/charts/trace-chart";
 import { authorizePage, crewRowOrNotFound } from "@/lib/authz";
-import { capacityInUnit, capacityText, forceUnitOf, ropeDiameterText } from "@/lib/figures";
+import { capacityInUnit, capacityText, forceUnitOf, ropeDiameterText, thresholdText } from "@/lib/figures";
 import { slipResultText } from "@/lib/validations/slip-tests";
 import { isCorrection } from "@/lib/slip-table";
 import type { TraceAnalysis } from "@/lib/trace-analysis";
@@ -44,7 +44,7 @@ export default async function SlipTestPage({ params }: { params: Promise<{ id: s
               <dt className="font-semibold">Trace</dt>
               <dd>
                 The engine found {slipResultText(analysis.onset.kind, shown(analysis.onset.forceN))}, counting as a slip any fall of more than{" "}
-                {shown(analysis.dropN)} below the running maximum
+                {thresholdText(analysis.dropN, crew.units)} below the running maximum
                 {analysis.pullEndS ? ` before the pull ended at ${analysis.pullEndS} s` : ""} (engine {analysis.engineVersion});{" "}
                 {corrected ? "the tester corrected it (see the notes)" : "the tester confirmed it"}.{" "}
                 <a href={`/api/uploads/${test.traceUploadId}`}>Download the trace</a>
