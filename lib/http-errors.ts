@@ -18,7 +18,9 @@ export function fieldErrorsOf(error: ZodError): Record<string, string> {
   const errors: Record<string, string> = {};
   for (const issue of error.issues) {
     const key = issue.path.join(".") || "form";
-    errors[key] ??= issue.message;
+    // A body that is not an object at all comes from a program, not from a form: say what the route takes.
+    const message = issue.path.length === 0 && issue.code === "invalid_type" ? "Send the form's fields as a JSON object." : issue.message;
+    errors[key] ??= message;
   }
   return errors;
 }

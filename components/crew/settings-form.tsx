@@ -1,23 +1,13 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { CrewSettingsSchema, SAFETY_FACTOR_CLASSES, type CrewSettings } from "@/lib/validations/crew";
+import { CrewSettingsSchema, SAFETY_FACTOR_CLASSES, SAFETY_FACTOR_LABELS, type CrewSettings } from "@/lib/validations/crew";
 import { useApiForm } from "@/components/forms/use-api-form";
 import { FormError } from "@/components/forms/form-error";
 import { Field } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { Button } from "@/components/ui/button";
 import { useToast } from "@/components/ui/toast";
-
-const factorLabels: Record<(typeof SAFETY_FACTOR_CLASSES)[number], string> = {
-  webbing: "Webbing (mainline and backup)",
-  rope: "Rope",
-  anchor: "Anchors",
-  connector: "Connectors and shackles",
-  sling: "Slings",
-  pulley: "Pulleys",
-  brake: "Brake",
-};
 
 export function CrewSettingsForm({ settings, editable }: { settings: CrewSettings; editable: boolean }) {
   const router = useRouter();
@@ -55,7 +45,7 @@ export function CrewSettingsForm({ settings, editable }: { settings: CrewSetting
             {SAFETY_FACTOR_CLASSES.map((c) => (
               <Field
                 key={c}
-                label={factorLabels[c]}
+                label={SAFETY_FACTOR_LABELS[c]}
                 type="number"
                 step="0.1"
                 inputMode="decimal"

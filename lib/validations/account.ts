@@ -26,7 +26,10 @@ export const SignUpSchema = z.object({ name: personName, email, password: newPas
 export const ForgotPasswordSchema = z.object({ email });
 
 export const ResetPasswordSchema = z.object({
-  token: z.string({ error: "The reset link is incomplete." }).min(20, { error: "The reset link is incomplete." }).max(200),
+  token: z
+    .string({ error: "The reset link is incomplete: open the link from the e-mail again." })
+    .min(20, { error: "The reset link is incomplete: open the link from the e-mail again." })
+    .max(200, { error: "The reset link is not one Spanwright sent: open the link from the e-mail again." }),
   password: newPassword,
 });
 

@@ -14,20 +14,47 @@ export const InviteSchema = z.object({ email, role: RoleSchema });
 
 export const ChangeRoleSchema = z.object({ role: RoleSchema });
 
-export const AcceptInvitationSchema = z.object({ token: z.string({ error: "The invitation link is incomplete." }).min(20).max(200) });
-
-// Below 1.5 a factor no longer leaves room for wear and dynamic loads; above 20 it is a typo.
-const factor = z
-  .number({ error: "Enter a number." })
-  .min(1.5, { error: "A minimum safety factor must be at least 1.5." })
-  .max(20, { error: "A minimum safety factor must be at most 20." });
+const INCOMPLETE_INVITATION = "The invitation link is incomplete: open the link from the e-mail again.";
+export const AcceptInvitationSchema = z.object({
+  token: z.string({ error: INCOMPLETE_INVITATION }).min(20, INCOMPLETE_INVITATION).max(200, INCOMPLETE_INVITATION),
+});
 
 export const SAFETY_FACTOR_CLASSES = ["webbing", "rope", "anchor", "connector", "sling", "pulley", "brake"] as const;
 export type SafetyFactorClass = (typeof SAFETY_FACTOR_CLASSES)[number];
 
+/** Each minimum's label on the settings form; its messages name it so. */
+export const SAFETY_FACTOR_LABELS: Record<SafetyFactorClass, string> = {
+  webbing: "Webbing (mainline and backup)",
+  rope: "Rope",
+  anchor: "Anchors",
+  connector: "Connectors and shackles",
+  sling: "Slings",
+  pulley: "Pulleys",
+  brake: "Brake",
+};
+
+// Below 1.5 a factor no longer leaves room for wear and dynamic loads; above 20 it is a typo (common practice, no source).
+const FACTOR_RANGE = { min: 1.5, max: 20 };
+const factor = (label: string) => {
+  const allowed = `a minimum safety factor from ${FACTOR_RANGE.min} to ${FACTOR_RANGE.max}`;
+  return z
+    .number({ error: `${label}: enter ${allowed}.` })
+    .min(FACTOR_RANGE.min, {
+      error: `${label}: the minimum safety factor must be at least ${FACTOR_RANGE.min} (allowed ${FACTOR_RANGE.min}–${FACTOR_RANGE.max}).`,
+    })
+    .max(FACTOR_RANGE.max, {
+      error: `${label}: the minimum safety factor must be at most ${FACTOR_RANGE.max} (allowed ${FACTOR_RANGE.min}–${FACTOR_RANGE.max}).`,
+    });
+};
+
 export const CrewSettingsSchema = z.object({
   units: z.enum(["si", "us"], { error: "Choose SI or US units." }),
-  minSafetyFactors: z.object(Object.fromEntries(SAFETY_FACTOR_CLASSES.map((c) => [c, factor])) as Record<SafetyFactorClass, typeof factor>),
+  minSafetyFactors: z.object(
+    Object.fromEntries(SAFETY_FACTOR_CLASSES.map((c) => [c, factor(SAFETY_FACTOR_LABELS[c])])) as Record<SafetyFactorClass, z.ZodNumber>,
+    {
+      error: "Give a minimum safety factor for each kind of gear.",
+    },
+  ),
   allowSelfSignOff: z.boolean({ error: "Choose yes or no." }),
 });
 

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { fromNewtons, toNewtons, type ForceUnit } from "@/physics";
-import { pastDate } from "./kit";
+import { notes, pastDate } from "./kit";
 
 // The shared schemas of the Slip bench: the forms and the route handlers validate with these.
 
@@ -50,7 +50,7 @@ export const SlipTestSchema = z
     force: z.number({ error: "Force must be a number." }).positive("Force must be more than zero."),
     forceUnit,
     testedOn: pastDate("Tested on"),
-    notes: z.string().trim().max(2000, "Notes have at most 2000 characters.").default(""),
+    notes: notes(),
     traceUploadId: z.uuid({ error: "The trace reference is not valid: upload the trace again." }).optional(),
   })
   .superRefine((test, ctx) => {
