@@ -22,7 +22,7 @@ test("a rigger adds a webbing with its stretch points, adds an item, retires it,
   await page.getByLabel("MBS (kN)").fill("23");
   await page.getByRole("button", { name: "Save changes" }).click();
   await expect(page.getByRole("heading", { name: "Cirrus 19 Test Webbing" })).toBeVisible();
-  await expect(page.getByText("23 kN")).toBeVisible();
+  await expect(page.getByText("23.00 kN")).toBeVisible();
   await page.getByText("Add an item").click();
   await page.getByLabel("Serial or label").fill("C19-1");
   await page.getByRole("button", { name: "Add item" }).click();

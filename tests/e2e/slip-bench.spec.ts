@@ -22,8 +22,9 @@ test("a tester uploads a trace, sees the chart and the detected onset, confirms 
 
   const chart = page.getByRole("img", { name: /Trace chart/ });
   await expect(chart).toBeVisible();
-  await expect(chart).toHaveAccessibleName(/Slip onset 5000 N at 50\.0 s/);
-  await expect(page.getByText("Detected: slipped at 5000 N")).toBeVisible();
+  // The crew works in SI: the trace read in N is shown in kN.
+  await expect(chart).toHaveAccessibleName(/Slip onset 5\.00 kN at 50\.0 s/);
+  await expect(page.getByText("Detected: slipped at 5.00 kN")).toBeVisible();
   await expect(page.getByLabel("Force", { exact: true })).toHaveValue("5000");
   await page.screenshot({ path: ".data/test/playwright/slip-trace-detected.png", fullPage: true });
 
@@ -37,7 +38,7 @@ test("a tester uploads a trace, sees the chart and the detected onset, confirms 
   await expect(cell).toContainText("1 test");
   await cell.getByRole("link").click();
   await expect(page.getByRole("heading", { name: "Tests of Smooth cam brake on 10.0 mm" })).toBeVisible();
-  await expect(page.getByRole("table", { name: "Slip tests" })).toContainText("slipped at 5000 N");
+  await expect(page.getByRole("table", { name: "Slip tests" })).toContainText("slipped at 5.00 kN");
   await page.screenshot({ path: ".data/test/playwright/slip-table-after.png", fullPage: true });
 });
 

@@ -58,7 +58,9 @@ describe("the last owner", () => {
     const owner = await AppClient.signedIn(crew.people.owner.email, FIXTURE_PASSWORD);
     const self = `/api/crew/members/${crew.people.owner.id}`;
     expect((await owner.patch(self, { role: "lead" })).status).toBe(409);
-    expect((await owner.delete(self)).status).toBe(409);
+    const leaving = await owner.delete(self);
+    expect(leaving.status).toBe(409);
+    expect((await leaving.json()).error).toBe("The crew must keep at least one owner: make someone else an owner first.");
     expect((await owner.patch(`/api/crew/members/${crew.people.lead.id}`, { role: "owner" })).status).toBe(200);
     expect((await owner.patch(self, { role: "lead" })).status).toBe(200);
   });
@@ -99,5 +101,19 @@ describe("isolation between crews", () => {
     expect((await rigger.patch("/api/crew/settings", settings)).status).toBe(200);
     expect((await rigger.switchCrew(first.id)).status).toBe(200);
     expect((await rigger.patch("/api/crew/settings", settings)).status).toBe(403);
+  });
+});
+
+describe("invitations", () => {
+  it("refuses to invite someone already in the crew, naming their role", async () => {
+    const crew = await createCrew("invite-member");
+    const owner = await AppClient.signedIn(crew.people.owner.email, FIXTURE_PASSWORD);
+    const response = await owner.post("/api/crew/invitations", { email: crew.people.rigger.email.toUpperCase(), role: "lead" });
+    expect(response.status).toBe(409);
+    const body = await response.json();
+    expect(body.fieldErrors.email).toBe(
+      `${crew.people.rigger.name} (${crew.people.rigger.email}) is already in ${crew.name}, as a rigger: change their role in the People table instead of inviting them.`,
+    );
+    expect(await testDb("invitations").where({ crew_id: crew.id }).count<{ count: string }[]>({ count: "*" })).toEqual([{ count: "0" }]);
   });
 });

@@ -106,7 +106,7 @@ describe("gear models of every kind", () => {
     expect((await backwardsRange.json()).fieldErrors["specs.maxRopeMm"]).toMatch(/cannot be below/);
 
     const efficiency = await as.rigger.post("/api/kit/models", { kind: "pulley", name: "x", specs: { sheaveDiameterMm: 50, efficiency: 92, mbsKN: 36 } });
-    expect((await efficiency.json()).fieldErrors["specs.efficiency"]).toMatch(/at most 1/);
+    expect((await efficiency.json()).fieldErrors["specs.efficiency"]).toBe("Efficiency must be at most 100 % (allowed 50–100 %).");
 
     const missing = await as.rigger.post("/api/kit/models", { kind: "sling", name: "x", specs: {} });
     expect((await missing.json()).fieldErrors["specs.mbsKN"]).toBe("MBS is required (0.5–300 kN).");
@@ -207,5 +207,47 @@ describe("inventory", () => {
     expect(await itemsInService(crew.id, [item.id])).toEqual([]);
     const refused = await as.rigger.post("/api/kit/items", { modelId: body.model.id, label: "P-2", inServiceSince: "2026-01-01" });
     expect(refused.status).toBe(409);
+  });
+});
+
+describe("labels and retired items", () => {
+  it("refuses a second item of a model with the same label, in any case, and allows it in another model", async () => {
+    const { body } = await createModel("sling");
+    const first = await as.rigger.post("/api/kit/items", { modelId: body.model.id, label: "SL-1", inServiceSince: "2026-01-01" });
+    expect(first.status).toBe(201);
+    const again = await as.rigger.post("/api/kit/items", { modelId: body.model.id, label: "sl-1", inServiceSince: "2026-01-01" });
+    expect(again.status).toBe(409);
+    expect((await again.json()).fieldErrors.label).toBe(
+      'Another item of this model is already labelled "sl-1": give each item its own serial or label (a letter or number more will do).',
+    );
+    const second = await (await as.rigger.post("/api/kit/items", { modelId: body.model.id, label: "SL-2", inServiceSince: "2026-01-01" })).json();
+    const renamed = await as.rigger.patch(`/api/kit/items/${second.item.id}`, { label: "SL-1", inServiceSince: "2026-01-01" });
+    expect(renamed.status).toBe(409);
+    const { body: another } = await createModel("sling");
+    expect((await as.rigger.post("/api/kit/items", { modelId: another.model.id, label: "SL-1", inServiceSince: "2026-01-01" })).status).toBe(201);
+  });
+
+  it("refuses to inspect a retired item, saying why, and keeps its log", async () => {
+    const { body } = await createModel("connector");
+    const item = (await (await as.rigger.post("/api/kit/items", { modelId: body.model.id, label: "C-1", inServiceSince: "2026-01-01" })).json()).item;
+    await as.rigger.post(`/api/kit/items/${item.id}/inspections`, { inspectedOn: "2026-02-01", result: "fail", notes: "bent gate" });
+    await as.rigger.post(`/api/kit/items/${item.id}/retire`, { retiredOn: "2026-02-02", reason: "bent gate" });
+    const refused = await as.rigger.post(`/api/kit/items/${item.id}/inspections`, { inspectedOn: "2026-03-01", result: "pass" });
+    expect(refused.status).toBe(409);
+    expect((await refused.json()).error).toBe("This item was retired on 2026-02-02: a retired item is not inspected again, and its log stays as it was.");
+    expect((await (await as.member.get(`/api/kit/items/${item.id}`)).json()).inspections).toHaveLength(1);
+  });
+});
+
+describe("a crew that works in US units", () => {
+  it("is refused a spec with the limit in lbf, and its values are kept in the Kit's units", async () => {
+    const us = await createCrew("kit-us");
+    await testDb("crews").where({ id: us.id }).update({ units: "us" });
+    const rigger = await AppClient.signedIn(us.people.rigger.email, us.people.rigger.password);
+    const tooStrong = await rigger.post("/api/kit/models", { kind: "sling", name: "x", specs: { mbsKN: 400 } });
+    // 300 kN = 67 443 lbf and 0.5 kN = 112.4 lbf (NIST SP 811), rounded inward to three figures.
+    expect((await tooStrong.json()).fieldErrors["specs.mbsKN"]).toBe("MBS must be at most 67400 lbf (allowed 113–67400 lbf).");
+    const created = await rigger.post("/api/kit/models", { kind: "sling", name: "US sling", specs: { mbsKN: 40 } });
+    expect((await created.json()).model.specs).toEqual({ mbsKN: 40 });
   });
 });

@@ -169,6 +169,12 @@ describe("a trace, detected, confirmed, in the slip table", () => {
     expect(csv.headers.get("content-type")).toMatch(/text\/csv/);
     // 2000 lbf is 8896.4 N: cut down to 8.89 kN, never rounded up to 8.90.
     expect((await csv.text()).split("\r\n")).toContain('"Bench cam",11.0,1,0,,,8.89');
+    // A crew in US units gets the same table in lbf: the 2000 lbf held-to bound reads 2000 (kept as 8896.4 N, cut down).
+    await testDb("crews").where({ id: crew.id }).update({ units: "us" });
+    const usCsv = (await (await as.member.get("/api/slip-table?format=csv")).text()).split("\r\n");
+    await testDb("crews").where({ id: crew.id }).update({ units: "si" });
+    expect(usCsv[0]).toBe("device,rope_diameter_mm,tests,slips,lowest_slip_lbf,slip_spread_lbf,held_to_at_least_lbf");
+    expect(usCsv).toContain('"Bench cam",11.0,1,0,,,2000');
     const listed = await (await as.member.get(`/api/slip-tests?deviceId=${brakeId}&ropeDiameterMm=11`)).json();
     expect(listed.tests).toHaveLength(1);
   });

@@ -84,6 +84,8 @@ describe("photos and manuals", () => {
     ["a body that is not a form", () => as.rigger.post("/api/uploads?purpose=photo", { file: "x" }), 400, /multipart\/form-data/],
     ["a photo for another crew's item", () => as.outsider.post("/api/uploads?purpose=photo", fileForm(PNG, "sling.png", { itemId })), 404, /of this crew/],
     ["a photo from a member", () => as.member.post("/api/uploads?purpose=photo", fileForm(PNG, "sling.png", { itemId })), 403, /may not/],
+    // The PNG cut short inside its image data: its signature and header are right, its pixels cannot be read.
+    ["a damaged photo", () => as.rigger.post("/api/uploads?purpose=photo", fileForm(PNG.subarray(0, 50), "cut.png", { itemId })), 415, /damaged image/],
   ];
   for (const [what, send, status, message] of refusals) {
     it(`refuses ${what}, saving nothing`, async () => {
@@ -94,4 +96,33 @@ describe("photos and manuals", () => {
       expect(await uploadCount()).toBe(before);
     });
   }
+});
+
+describe("removing files", () => {
+  it("removes a photo for a rigger: its record and its bytes; refuses members, other crews and traces", async () => {
+    const upload = (await (await as.rigger.post("/api/uploads?purpose=photo", fileForm(PNG, "gone.png", { itemId }))).json()).upload;
+    expect((await as.member.delete(`/api/uploads/${upload.id}`)).status).toBe(403);
+    expect((await as.outsider.delete(`/api/uploads/${upload.id}`)).status).toBe(404);
+    const removed = await as.rigger.delete(`/api/uploads/${upload.id}`);
+    expect(removed.status).toBe(200);
+    expect((await as.rigger.get(`/api/uploads/${upload.id}`)).status).toBe(404);
+    expect(await testDb("uploads").where({ id: upload.id }).first()).toBeUndefined();
+    expect((await as.rigger.delete(`/api/uploads/${upload.id}`)).status).toBe(404);
+
+    const [trace] = await testDb("uploads")
+      .insert({
+        crew_id: crew.id,
+        purpose: "trace",
+        storage_key: `uploads/test-${crypto.randomUUID()}`,
+        file_name: "t.csv",
+        content_type: "text/csv",
+        byte_size: 1,
+        sha256: "0",
+        uploaded_by: crew.people.rigger.id,
+      })
+      .returning("id");
+    const refused = await as.rigger.delete(`/api/uploads/${trace.id}`);
+    expect(refused.status).toBe(409);
+    expect((await refused.json()).error).toBe("A load-cell trace is the record of its slip test and stays with it.");
+  });
 });
