@@ -8,7 +8,7 @@ export const SERVER_LIB = [
   "lib/{api,app-origin,authz,rate-limit,storage}.ts",
   "lib/auth/{lucia,passwords,require-signed-in,session}.ts",
   "lib/mail/**",
-  "lib/planner/{catalogue,revision-of-record}.ts",
+  "lib/planner/{catalogue,page-data,revision-of-record}.ts",
 ];
 
 const APP_LAYERS = ["components/**", "app/**"];

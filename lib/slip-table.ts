@@ -84,7 +84,15 @@ export function slipTableCsv(table: SlipTable, units: UnitSystem): string {
   const rows = [...table.cells]
     .sort((a, b) => names.get(a.deviceId)!.localeCompare(names.get(b.deviceId)!) || a.ropeDiameterMm - b.ropeDiameterMm)
     .map((c) =>
-      [quote(names.get(c.deviceId)!), ropeDiameterDigits(c.ropeDiameterMm), c.tests, c.slips, force(c.lowestSlipN), force(c.spreadN), force(c.highestHeldN)].join(","),
+      [
+        quote(names.get(c.deviceId)!),
+        ropeDiameterDigits(c.ropeDiameterMm),
+        c.tests,
+        c.slips,
+        force(c.lowestSlipN),
+        force(c.spreadN),
+        force(c.highestHeldN),
+      ].join(","),
     );
   return [`device,rope_diameter_mm,tests,slips,lowest_slip_${unit},slip_spread_${unit},held_to_at_least_${unit}`, ...rows].join("\r\n") + "\r\n";
 }

@@ -15,7 +15,17 @@ const SERIES = ["#1c4e91", "#b42318", "#17704f", "#5c3d00", "#6d3a9c", "#0e6b78"
  * Slip load against rope diameter, one series per device: a filled dot for each slip, a hollow
  * up-pointing triangle for each held-to result (the slip load is above it), a line through the lowest slips.
  */
-export function SlipLoadChart({ id, tests, devices, units }: { id: string; tests: SlipTableTest[]; devices: { id: string; name: string }[]; units: UnitSystem }) {
+export function SlipLoadChart({
+  id,
+  tests,
+  devices,
+  units,
+}: {
+  id: string;
+  tests: SlipTableTest[];
+  devices: { id: string; name: string }[];
+  units: UnitSystem;
+}) {
   const unit = forceUnitOf(units);
   const shown = (newtons: number) => fromNewtons(newtons, unit);
   const diameters = tests.map((t) => t.ropeDiameterMm);

@@ -138,11 +138,8 @@ export function SlipTestForm({ devices, ropes, units }: { devices: DeviceOption[
             <TraceChart time={analysis.chart.time} force={analysis.chart.force} units={units} onset={analysis.onset} dropN={analysis.dropN} />
             <p>
               Read {analysis.rows.toLocaleString("en")} rows over {analysis.durationS.toFixed(1)} s (time from “{analysis.timeColumn}”, force from “
-              {analysis.forceColumn}”).{" "}
-              <strong>
-                Detected: {slipResultText(analysis.onset.kind, capacityText(analysis.onset.forceN, units))}
-              </strong>
-              . Check it against the chart, then confirm it below or correct it and say why in the notes.
+              {analysis.forceColumn}”). <strong>Detected: {slipResultText(analysis.onset.kind, capacityText(analysis.onset.forceN, units))}</strong>. Check it
+              against the chart, then confirm it below or correct it and say why in the notes.
             </p>
           </div>
         ) : null}

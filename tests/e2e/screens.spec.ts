@@ -91,7 +91,8 @@ for (const size of WIDTHS) {
       const settings = { minSafetyFactors: { webbing: 3, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: 3 }, allowSelfSignOff: false };
       const setUnits = (units: "si" | "us") =>
         page.evaluate(
-          (body) => fetch("/api/crew/settings", { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(body) }).then((r) => r.status),
+          (body) =>
+            fetch("/api/crew/settings", { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(body) }).then((r) => r.status),
           { units, ...settings },
         );
       expect(await setUnits("us")).toBe(200);

@@ -29,6 +29,9 @@ describe("a page for a row", () => {
     `/kit/models/${unknown}/edit`,
     `/kit/items/${unknown}`,
     `/slip-bench/tests/${unknown}`,
+    `/rigs/${unknown}`,
+    `/sites/${unknown}`,
+    `/sites/${unknown}/edit`,
     "/kit/items/not-a-uuid",
   ]) {
     it(`answers 404 for ${path.replace(unknown, "an unknown id")}, on the branded page`, async () => {
@@ -55,6 +58,8 @@ describe("a page that needs more than a member", () => {
     ["/kit/new", "add and change gear in the Kit"],
     ["/slip-bench/new", "record slip tests and their traces"],
     [`/kit/models/${modelId}/edit`, "add and change gear in the Kit"],
+    ["/rigs/new", "plan and save rigs"],
+    ["/sites/new", "add and change sites"],
   ];
   it("tells a member what it needs and what they are, instead of an error", async () => {
     for (const [path, words] of pages()) {

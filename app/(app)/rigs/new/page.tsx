@@ -2,7 +2,8 @@ import type { Metadata } from "next";
 import { PageHeader } from "@/components/page-header";
 import { CautionNotice } from "@/components/caution-notice";
 import { Planner } from "@/components/rigs/planner";
-import { authorizePage } from "@/lib/authz";
+import { RoleRequired } from "@/components/role-required";
+import { authorizeRolePage } from "@/lib/authz";
 import { plannerData } from "@/lib/planner/page-data";
 import { startingRig } from "@/lib/rig-form/starting-rig";
 
@@ -10,7 +11,8 @@ export const metadata: Metadata = { title: "New rig" };
 
 export default async function NewRigPage({ searchParams }: { searchParams: Promise<{ siteId?: string }> }) {
   const { siteId } = await searchParams;
-  const context = await authorizePage("rig.write", `/rigs/new${siteId ? `?siteId=${encodeURIComponent(siteId)}` : ""}`);
+  const { context, refusal } = await authorizeRolePage("rig.write", `/rigs/new${siteId ? `?siteId=${encodeURIComponent(siteId)}` : ""}`);
+  if (refusal) return <RoleRequired title="New rig" refusal={refusal} back={{ href: "/rigs", label: "Back to the rigs" }} />;
   const data = await plannerData(context.crew.id);
   const site = data.sites.find((s) => s.id === siteId) ?? null;
   const example = startingRig(data.minimums);

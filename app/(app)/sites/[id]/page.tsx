@@ -8,10 +8,9 @@ import { FileList } from "@/components/kit/file-list";
 import { FileUploadForm } from "@/components/kit/file-upload-form";
 import { GroundChart } from "@/components/sites/ground-chart";
 import { SiteActions } from "@/components/sites/site-actions";
-import { authorizePage } from "@/lib/authz";
+import { authorizePage, crewRowOrNotFound } from "@/lib/authz";
 import { can } from "@/lib/roles";
 import { formatDistance } from "@/lib/rig-form/format";
-import { crewRowOrNotFound } from "@/lib/validations/ids";
 import { ANCHOR_KIND_LABELS, MEASUREMENT_LABELS, type SiteAnchor } from "@/lib/validations/sites";
 import { REVISION_STATE_LABELS, RigListQuerySchema } from "@/lib/validations/rigs";
 import { findSite } from "@/db/sites";
@@ -126,7 +125,7 @@ export default async function SitePage({ params }: { params: Promise<{ id: strin
         </section>
         <section aria-labelledby="photos" className="space-y-3">
           <h2 id="photos">Photos</h2>
-          <FileList files={photos} />
+          <FileList files={photos} removable={writer} />
           {writer ? <FileUploadForm purpose="photo" owner={{ siteId: site.id }} /> : null}
         </section>
         {writer ? <SiteActions siteId={site.id} archived={site.archivedAt !== null} rigCount={site.rigCount} /> : null}
