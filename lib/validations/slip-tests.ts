@@ -23,11 +23,16 @@ export function slipResultText(result: SlipOutcome, force: string, capital = fal
  */
 export const BENCH_FORCE_RANGE_N = { min: 100, max: 50_000 } as const;
 
-/** "0.1–50 kN", "22–11 240 lbf"…: the bench's range in the unit the tester works in. */
-export function benchRangeIn(unit: ForceUnit): string {
+const rangeIn = (range: { min: number; max: number }, unit: ForceUnit) => {
   const show = (n: number) => Number(fromNewtons(n, unit).toPrecision(3)).toString();
-  return `${show(BENCH_FORCE_RANGE_N.min)}–${show(BENCH_FORCE_RANGE_N.max)} ${unit}`;
-}
+  return `${show(range.min)}–${show(range.max)} ${unit}`;
+};
+
+/** "0.1–50 kN", "22–11 240 lbf"…: the bench's range in the unit the tester works in. */
+export const benchRangeIn = (unit: ForceUnit) => rangeIn(BENCH_FORCE_RANGE_N, unit);
+
+/** The falls that may count as a slip: 5 N (above a load cell's noise) to 5 kN (common practice, no source). */
+const SLIP_FALL_RANGE_N = { min: 5, max: 5000 } as const;
 
 /** Null when a force in N is one the bench can measure; else the message saying what is allowed. */
 export function benchForceProblem(forceN: number, given: string, unit: ForceUnit): string | null {
@@ -67,16 +72,19 @@ export type SlipTest = z.output<typeof SlipTestSchema>;
 export const TraceOptionsSchema = z
   .object({
     unit: forceUnit,
-    drop: z.number({ error: "The drop that counts as a slip must be a number." }).positive("The drop that counts as a slip must be more than zero."),
-    pullEndS: z.number({ error: "The time the pull ended must be a number of seconds." }).positive("The time the pull ended must be more than 0 s.").optional(),
+    drop: z.number({ error: "Fall that counts as a slip: enter a number." }).positive("Fall that counts as a slip: it must be more than zero."),
+    pullEndS: z
+      .number({ error: "Pull ended at: enter a number of seconds, or leave it blank." })
+      .positive("Pull ended at: it must be more than 0 s.")
+      .optional(),
   })
   .superRefine((options, ctx) => {
     const dropN = toNewtons(options.drop, options.unit);
-    if (dropN < 5 || dropN > 5000) {
+    if (dropN < SLIP_FALL_RANGE_N.min || dropN > SLIP_FALL_RANGE_N.max) {
       ctx.addIssue({
         code: "custom",
         path: ["drop"],
-        message: `A drop of ${options.drop} ${options.unit} is outside 5 N–5 kN: it would catch noise or miss a slip; check the unit.`,
+        message: `Fall that counts as a slip: ${options.drop} ${options.unit} is outside ${rangeIn(SLIP_FALL_RANGE_N, options.unit)}, where it would catch noise or miss a slip; check the unit.`,
       });
     }
   });

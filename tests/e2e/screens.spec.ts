@@ -43,7 +43,8 @@ for (const size of WIDTHS) {
 
       await page.goto("/kit");
       await page.getByRole("link", { name: "Tubular webbing 25 mm" }).click();
-      await expect(page.getByText("32.00 kN")).toBeVisible();
+      await expect(page.getByRole("heading", { level: 1, name: "Tubular webbing 25 mm" })).toBeVisible();
+      await expect(page.locator("dl").getByText("32.00 kN", { exact: true })).toBeVisible();
       await shot(page, "model", size.name);
 
       await page.goto("/slip-bench");
@@ -99,9 +100,12 @@ for (const size of WIDTHS) {
       try {
         await page.goto("/kit");
         await page.getByRole("link", { name: "Tubular webbing 25 mm" }).click();
-        // 32 kN = 7193.9 lbf, cut down; 2 kN of a stretch point = 449.6 lbf, to the whole lbf (NIST SP 811).
-        await expect(page.getByText("7193 lbf")).toBeVisible();
-        await expect(page.getByText("Mass per foot")).toBeVisible();
+        await expect(page.getByRole("heading", { level: 1, name: "Tubular webbing 25 mm" })).toBeVisible();
+        // 32 kN = 7193.9 lbf, cut down; the 1 kN stretch point = 224.8 lbf, to the whole lbf (NIST SP 811).
+        const specs = page.locator("dl");
+        await expect(specs.getByText("7193 lbf", { exact: true })).toBeVisible();
+        await expect(specs.getByText("Mass per foot", { exact: true })).toBeVisible();
+        await expect(specs.getByRole("cell", { name: "225", exact: true })).toBeVisible();
         await shot(page, "model-us", size.name);
         await page.getByRole("link", { name: "Edit specs" }).click();
         await expect(page.getByLabel("MBS (lbf)")).toHaveValue("7193");

@@ -4,6 +4,6 @@ import { RequestError } from "@/lib/http-errors";
 import { deleteSessionOf } from "@/db/users";
 
 export const DELETE = signedInRoute<{ id: string }>(async ({ user }, _request, { id }) => {
-  if (!(await deleteSessionOf(user.id, id))) throw new RequestError(404, "None of your sessions has that id.");
+  if (!(await deleteSessionOf(user.id, id))) throw new RequestError(404, "That device is already signed out.");
   return NextResponse.json({ signedOut: id });
 });

@@ -4,6 +4,6 @@ import { RequestError } from "@/lib/http-errors";
 import { revokeInvitation } from "@/db/invitations";
 
 export const DELETE = crewRoute<{ id: string }>("crew.invite", async ({ crew }, _request, { id }) => {
-  if (!(await revokeInvitation(crew.id, id))) throw new RequestError(404, "No open invitation of this crew has that id.");
+  if (!(await revokeInvitation(crew.id, id))) throw new RequestError(404, "This invitation is no longer open: it was accepted, withdrawn or has expired.");
   return NextResponse.json({ revoked: id });
 });
