@@ -30,7 +30,7 @@ export function SlipTableMatrix({
               Device
             </th>
             {table.diameters.map((d) => (
-              <th key={d} scope="col" className="px-4 py-2 text-right">
+              <th key={d} scope="col" className="whitespace-nowrap px-4 py-2 text-right">
                 {ropeDiameterText(d)}
               </th>
             ))}
@@ -47,7 +47,7 @@ export function SlipTableMatrix({
                 const name = `${device.name} ${d.toFixed(1)}`;
                 if (!cell) {
                   return (
-                    <td key={d} className="px-4 py-3 text-right text-ink-600" data-cell={name}>
+                    <td key={d} className="whitespace-nowrap px-4 py-3 text-right text-ink-600" data-cell={name}>
                       untested
                     </td>
                   );
@@ -72,7 +72,7 @@ export function SlipTableMatrix({
                   </>
                 );
                 return (
-                  <td key={d} className="px-4 py-3 text-right tabular-nums" data-cell={name}>
+                  <td key={d} className="whitespace-nowrap px-4 py-3 text-right tabular-nums" data-cell={name}>
                     {cellHref ? (
                       <Link
                         href={cellHref(device.id, d)}

@@ -16,6 +16,9 @@ test("a tester uploads a trace, sees the chart and the detected onset, confirms 
 
   await page.getByRole("link", { name: "Record a slip test" }).click();
   await expect(page.getByRole("heading", { name: "Record a slip test" })).toBeVisible();
+  // Saved too early, the force is missing; once the trace fills it, that message goes.
+  await page.getByRole("button", { name: "Save slip test" }).click();
+  await expect(page.getByText("Force must be a number.")).toBeVisible();
   await page.getByLabel("Trace file (CSV)").setInputFiles({ name: "smooth-cam-10mm.csv", mimeType: "text/csv", buffer: Buffer.from(pullCsv()) });
   await page.getByLabel("Force unit of the trace").selectOption("N");
   await page.getByRole("button", { name: "Read trace" }).click();
@@ -30,7 +33,13 @@ test("a tester uploads a trace, sees the chart and the detected onset, confirms 
 
   await page.getByLabel("Device tested").selectOption({ label: "Smooth cam brake" });
   await page.getByLabel("Rope (from the Kit)").selectOption({ label: "Not in the Kit" });
+  await expect(page.getByText("Force must be a number.")).toHaveCount(0);
   await page.getByLabel("Rope diameter (mm)").fill("10");
+  // A value changed from the detected one needs its reason, said once, beside the notes.
+  await page.getByLabel("Force", { exact: true }).fill("4900");
+  await page.getByRole("button", { name: "Confirm and save slip test" }).click();
+  await expect(page.getByText(/You changed the value detected in the trace/)).toHaveCount(1);
+  await page.getByLabel("Force", { exact: true }).fill("5000");
   await page.getByRole("button", { name: "Confirm and save slip test" }).click();
 
   await expect(page).toHaveURL(/\/slip-bench$/);
