@@ -10,13 +10,14 @@ let stack: RunningStack | null = null;
 let server: AppServer | null = null;
 let stopping = false;
 
-async function shutdown(code: number): Promise<never> {
-  if (!stopping) {
-    stopping = true;
-    await server?.stop();
-    await stack?.stop();
-    console.log("spanwright: stopped.");
-  }
+// Ctrl-C reaches this process more than once (from the terminal and again from npm and tsx, which pass it on):
+// only the first starts the shutdown, and the process exits once everything it started has stopped.
+async function shutdown(code: number): Promise<void> {
+  if (stopping) return;
+  stopping = true;
+  await server?.stop();
+  await stack?.stop();
+  console.log("spanwright: stopped.");
   process.exit(code);
 }
 
