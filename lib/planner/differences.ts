@@ -1,5 +1,6 @@
 import { inputText, unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
 import { kindOf, labelOf } from "./fields";
+import { SLIP_RESULT_WORDS } from "@/lib/validations/slip-tests";
 
 // What differs between two rig inputs, field by field, in the words and units of the form: for the
 // revision history, and for a save that met a newer revision (which of my edits to carry over).
@@ -52,8 +53,7 @@ const CHOICE_WORDS: Record<string, string> = {
   leg: "one leg",
   tail: "on the crew's tail",
   stage: "on an inner stage",
-  slipped: "slipped at",
-  held: "held to",
+  ...SLIP_RESULT_WORDS,
 };
 
 export interface InputDifference {
