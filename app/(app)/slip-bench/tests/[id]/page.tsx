@@ -43,7 +43,7 @@ export default async function SlipTestPage({ params }: { params: Promise<{ id: s
             <>
               <dt className="font-semibold">Trace</dt>
               <dd>
-                The engine found {slipResultText(analysis.onset.kind, shown(analysis.onset.forceN))}, counting as a slip any fall of more than{" "}
+                From the trace the engine found: {slipResultText(analysis.onset.kind, shown(analysis.onset.forceN))}, counting as a slip any fall of more than{" "}
                 {thresholdText(analysis.dropN, crew.units)} below the running maximum
                 {analysis.pullEndS ? ` before the pull ended at ${analysis.pullEndS} s` : ""} (engine {analysis.engineVersion});{" "}
                 {corrected ? "the tester corrected it (see the notes)" : "the tester confirmed it"}.{" "}
