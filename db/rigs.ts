@@ -1,3 +1,4 @@
+import "server-only";
 import type { Knex } from "knex";
 import { db } from "./knex";
 import type { RigResult } from "@/physics";
@@ -64,8 +65,8 @@ export async function findRevision(crewId: string, rigId: string, revisionId: st
   return row ?? null;
 }
 
-function headOf(trx: Knex | Knex.Transaction, crewId: string, rigId: string): Promise<{ id: string; number: number } | undefined> {
-  return trx("rig_revisions").where({ crew_id: crewId, rig_id: rigId }).orderBy("number", "desc").first("id", "number");
+async function headOf(trx: Knex | Knex.Transaction, crewId: string, rigId: string): Promise<{ id: string; number: number } | null> {
+  return (await trx("rig_revisions").where({ crew_id: crewId, rig_id: rigId }).orderBy("number", "desc").first("id", "number")) ?? null;
 }
 
 // The rigs list reads each rig with its current revision (the highest number) beside it.

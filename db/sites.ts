@@ -1,3 +1,4 @@
+import "server-only";
 import { db } from "./knex";
 import type { Site, SiteAnchor, SiteGround, MeasurementMethod } from "@/lib/validations/sites";
 

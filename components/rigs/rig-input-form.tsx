@@ -72,7 +72,7 @@ function GearPicker({ name, kinds, fills }: { name: string; kinds: readonly Gear
     { value: "", label: "Not from the Kit: type its figures" },
     ...models.map((m) => ({
       value: m.id,
-      label: `${m.name}${kinds.length > 1 ? ` (${GEAR_KIND_LABELS[m.kind].toLowerCase()})` : ""}${m.retiredOn ? `, retired ${m.retiredOn}` : ""}`,
+      label: `${m.name}${kinds.length > 1 ? ` (${m.kind.replace("_", " ")})` : ""}${m.retiredOn ? `, retired ${m.retiredOn}` : ""}`,
       disabled: m.retiredOn !== null && m.id !== value,
     })),
   ];

@@ -46,7 +46,7 @@ function headlines(result: RigResult, units: UnitSystem): Headline[] {
 function NoFigures({ evaluation, compact }: { evaluation: Exclude<Evaluation, { kind: "figures" }>; compact: boolean }) {
   return (
     <div role="status" className={classNames("rounded-panel border-2 border-danger-600 bg-danger-100 text-danger-700", compact ? "p-2 text-sm" : "p-4")}>
-      <p className="font-semibold">No figures for this input.</p>
+      {compact ? <p className="font-semibold">No figures for this input.</p> : <h2 className="text-lg text-danger-700">No figures for this input</h2>}
       <p>
         {evaluation.kind === "input"
           ? evaluation.sentence

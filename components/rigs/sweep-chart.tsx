@@ -1,7 +1,7 @@
 import { formatDepth, formatDistance, formatLoad } from "@/lib/rig-form/format";
-import { toShown, unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
+import { fromShown, toShown, unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
 import type { Sweep, SweepPoint } from "@/physics";
-import { linearScale } from "@/components/charts/scale";
+import { axisTicks, linearScale } from "@/components/charts/scale";
 
 const WIDTH = 640;
 const PANEL = 210;
@@ -48,14 +48,15 @@ function SweepPanel({
       </text>
       <line x1={PAD.left} x2={WIDTH - PAD.right} y1={bottom} y2={bottom} className="stroke-ink-400" />
       <line x1={PAD.left} x2={PAD.left} y1={offset + PAD.top} y2={bottom} className="stroke-ink-400" />
-      {[low, high].map((v) => (
-        <text key={v} x={PAD.left - 6} y={y(v) + 4} textAnchor="end" className="fill-ink-700 text-[20px] tabular-nums">
-          {toShown(v, kind, units).toFixed(2)}
+      {/* Ticks at round values in the crew's units: never the extreme itself, which the figures below state, rounded the safe way. */}
+      {axisTicks(toShown(low, kind, units), toShown(high, kind, units), 3).map((t) => (
+        <text key={t.text} x={PAD.left - 6} y={y(fromShown(t.value, kind, units)) + 4} textAnchor="end" className="fill-ink-700 text-[20px] tabular-nums">
+          {t.text}
         </text>
       ))}
-      {[0, span / 2, span].map((m) => (
-        <text key={m} x={x(m)} y={bottom + 26} textAnchor={m === 0 ? "start" : m === span ? "end" : "middle"} className="fill-ink-700 text-[20px]">
-          {formatDistance(m, units)}
+      {axisTicks(0, toShown(span, "length", units), 4).map((t) => (
+        <text key={t.text} x={x(fromShown(t.value, "length", units))} y={bottom + 26} textAnchor="middle" className="fill-ink-700 text-[20px] tabular-nums">
+          {t.text}
         </text>
       ))}
       {walkerX === undefined ? null : (
@@ -122,7 +123,10 @@ export function SweepChart({ sweep, units, walkerX }: { sweep: Sweep; units: Uni
         <SweepPanel title="Walker sag below the chord" kind="length" series={sag} sweep={sweep} units={units} offset={PANEL} walkerX={walkerX} />
       </svg>
       <figcaption className="mt-2 space-y-1 text-sm text-ink-700">
-        <p>Across: the walker&apos;s distance from A; the dashed upright is where the walker is now. Red dots mark the worst case of each line:</p>
+        <p>
+          Across: the walker&apos;s distance from A ({unitLabel("length", units)}); the dashed upright is where the walker is now. Red dots mark the worst case
+          of each line:
+        </p>
         <ul className="list-disc pl-5 font-medium text-ink-900">
           {[...tension, ...sag].map((s) => (
             <li key={s.label}>{s.worstText}</li>

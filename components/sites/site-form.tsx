@@ -38,11 +38,56 @@ const GROUND_CHOICES = [
   { value: "profile", label: "A profile: heights at distances from A" },
 ];
 
+/** The profile's points; mounted with the profile, so the list starts from the points the profile holds. */
+function GroundPoints() {
+  const points = useFieldArray<SiteInput, "ground.points" & never>({ name: "ground.points" as never });
+  return (
+    <div className="space-y-2">
+      <GroupProblem name="ground.points" />
+      <table className="w-full text-left text-sm">
+        <caption className="pb-1 text-left font-semibold">Ground points, from A towards B</caption>
+        <thead>
+          <tr className="border-b border-ink-200">
+            <th scope="col" className="py-1 pr-2">
+              Distance from A
+            </th>
+            <th scope="col" className="py-1 pr-2">
+              Ground height
+            </th>
+            <th scope="col">
+              <span className="sr-only">Remove</span>
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {points.fields.map((point, i) => (
+            <tr key={point.id} className="align-top">
+              <td className="py-1 pr-2">
+                <QuantityCell name={`ground.points.${i}.xM`} label={`Ground point ${i + 1} distance from A`} kind="length" />
+              </td>
+              <td className="py-1 pr-2">
+                <QuantityCell name={`ground.points.${i}.heightM`} label={`Ground point ${i + 1} height`} kind="length" />
+              </td>
+              <td className="py-1">
+                <Button tone="quiet" onClick={() => points.remove(i)} disabled={points.fields.length <= 1} aria-label={`Remove ground point ${i + 1}`}>
+                  ✕
+                </Button>
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <Button tone="secondary" onClick={() => points.append({ xM: Number.NaN, heightM: Number.NaN } as never)}>
+        Add a ground point
+      </Button>
+    </div>
+  );
+}
+
 function GroundFields() {
   const {
     field: { ref, onChange, onBlur, value },
   } = useController<SiteInput, "ground">({ name: "ground" });
-  const points = useFieldArray<SiteInput, "ground.points" & never>({ name: "ground.points" as never });
   const kind = value.kind;
   return (
     <Panel title="Ground under the line">
@@ -68,47 +113,7 @@ function GroundFields() {
         }}
       />
       {kind === "level" ? <QuantityField name="ground.heightAboveGroundM" label="Height of anchor A above the ground" kind="length" /> : null}
-      {kind === "profile" ? (
-        <div className="space-y-2">
-          <GroupProblem name="ground.points" />
-          <table className="w-full text-left text-sm">
-            <caption className="pb-1 text-left font-semibold">Ground points, from A towards B</caption>
-            <thead>
-              <tr className="border-b border-ink-200">
-                <th scope="col" className="py-1 pr-2">
-                  Distance from A
-                </th>
-                <th scope="col" className="py-1 pr-2">
-                  Ground height
-                </th>
-                <th scope="col">
-                  <span className="sr-only">Remove</span>
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {points.fields.map((point, i) => (
-                <tr key={point.id} className="align-top">
-                  <td className="py-1 pr-2">
-                    <QuantityCell name={`ground.points.${i}.xM`} label={`Ground point ${i + 1} distance from A`} kind="length" />
-                  </td>
-                  <td className="py-1 pr-2">
-                    <QuantityCell name={`ground.points.${i}.heightM`} label={`Ground point ${i + 1} height`} kind="length" />
-                  </td>
-                  <td className="py-1">
-                    <Button tone="quiet" onClick={() => points.remove(i)} disabled={points.fields.length <= 1} aria-label={`Remove ground point ${i + 1}`}>
-                      ✕
-                    </Button>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-          <Button tone="secondary" onClick={() => points.append({ xM: Number.NaN, heightM: Number.NaN } as never)}>
-            Add a ground point
-          </Button>
-        </div>
-      ) : null}
+      {kind === "profile" ? <GroundPoints /> : null}
     </Panel>
   );
 }

@@ -103,10 +103,7 @@ export const SiteSchema = z
     anchors: z.object({ a: SiteAnchorSchema, b: SiteAnchorSchema }),
     // Both coordinates left blank is no coordinates.
     coordinates: z.preprocess(
-      (v) =>
-        v && typeof v === "object" && (v as Record<string, unknown>).latitude === undefined && (v as Record<string, unknown>).longitude === undefined
-          ? null
-          : v,
+      (v) => (v && typeof v === "object" && Object.values(v).every((part) => part === undefined || part === null || part === "") ? null : v),
       z
         .object({
           latitude: z.number({ error: "Latitude: enter a number of degrees." }).min(-90, "Latitude: from -90° to 90°.").max(90, "Latitude: from -90° to 90°."),
