@@ -41,10 +41,14 @@ function useWidth() {
   return { ref, width };
 }
 
-/** After a walker move has been drawn, how long it took from the input to the next frame. */
+/**
+ * After a walker move, how long it took from the input until the figures and the diagram were updated
+ * ("walker-commit"), and until the next frame could show them ("walker-frame").
+ */
 function useFrameMeasure(result: RigResult) {
   useLayoutEffect(() => {
     if (performance.getEntriesByName("walker-input", "mark").length === 0) return;
+    performance.measure("walker-commit", "walker-input");
     requestAnimationFrame(() => {
       performance.measure("walker-frame", "walker-input");
       performance.clearMarks("walker-input");

@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useLayoutEffect, useMemo, useState, useSyncExternalStore, type ReactNode } from "react";
+import { useCallback, useDeferredValue, useLayoutEffect, useMemo, useState, useSyncExternalStore, type ReactNode } from "react";
 import dynamic from "next/dynamic";
 import { FormProvider, useForm, useWatch, type UseFormReturn } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -129,6 +129,8 @@ function Workbench({
   // The server's JavaScript engine may round a last bit differently from the browser's, so figures are
   // drawn in the browser only: a server-rendered figure could never match the page it hydrates.
   const result = inBrowser && evaluation.kind === "figures" ? evaluation.result : null;
+  // The long list of details below follows at a lower priority, so a dragged walker moves the diagram and headline at once.
+  const details = useDeferredValue(result ? { result, gearProblems: evaluation.gearProblems } : null);
 
   return (
     <>
@@ -175,7 +177,7 @@ function Workbench({
       </div>
       <div className="mt-8 space-y-6">
         {mode === "check" ? <ServerCheck evaluation={evaluation} /> : null}
-        {result ? <RigDetails result={result} units={units} gearProblems={evaluation.gearProblems} /> : null}
+        {details ? <RigDetails result={details.result} units={units} gearProblems={details.gearProblems} /> : null}
       </div>
     </>
   );

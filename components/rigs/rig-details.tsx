@@ -1,6 +1,6 @@
 "use client";
 
-import type { ReactNode } from "react";
+import { memo, type ReactNode } from "react";
 import { formatCapacity, formatDepth, formatDistance, formatLoad, truncateRatio } from "@/lib/rig-form/format";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { RigResult, SafetyFactor } from "@/physics";
@@ -140,7 +140,15 @@ function RigFigures({ result, units }: { result: RigResult; units: UnitSystem })
 }
 
 /** Every figure of the rig below the headline: walker, leash fall, tensioning, brake, anchors, the sweep, safety factors, warnings and cautions. */
-export function RigDetails({ result, units, gearProblems }: { result: RigResult; units: UnitSystem; gearProblems: readonly { message: string }[] }) {
+export const RigDetails = memo(function RigDetails({
+  result,
+  units,
+  gearProblems,
+}: {
+  result: RigResult;
+  units: UnitSystem;
+  gearProblems: readonly { message: string }[];
+}) {
   const warnings = [...gearProblems.map((p) => p.message), ...result.warnings];
   return (
     <div className="space-y-6">
@@ -178,4 +186,4 @@ export function RigDetails({ result, units, gearProblems }: { result: RigResult;
       </Panel>
     </div>
   );
-}
+});

@@ -38,7 +38,7 @@ async function main(appUrl: string) {
 
   const box = (await slider.boundingBox())!;
   const y = box.y + box.height / 2;
-  await page.evaluate(() => performance.clearMeasures("walker-frame"));
+  await page.evaluate(() => performance.clearMeasures());
   await page.mouse.move(box.x + box.width * 0.2, y);
   await page.mouse.down();
   for (let i = 0; i < MOVES; i++) {
@@ -49,9 +49,11 @@ async function main(appUrl: string) {
     await page.evaluate(() => new Promise((resolve) => requestAnimationFrame(() => requestAnimationFrame(resolve))));
   }
   await page.mouse.up();
-  const frames = await page.evaluate(() => performance.getEntriesByName("walker-frame").map((e) => e.duration));
+  const [commits, frames] = await page.evaluate(() =>
+    ["walker-commit", "walker-frame"].map((name) => performance.getEntriesByName(name).map((e) => e.duration)),
+  );
   await browser.close();
-  process.stdout.write(JSON.stringify({ firstLoadBytes, frames }));
+  process.stdout.write(JSON.stringify({ firstLoadBytes, commits, frames }));
 }
 
 main(process.env.BENCH_APP_URL!).catch((error) => {
