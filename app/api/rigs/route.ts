@@ -20,6 +20,6 @@ export const POST = crewRoute("rig.write", async ({ crew, user }, request) => {
     });
   }
   const revision = await revisionOfRecord(crew.id, crew.units, body);
-  const { rigId, revisionId } = await createRig(crew.id, user.id, revision);
+  const { rigId, revisionId } = await createRig(crew.id, user, revision);
   return NextResponse.json({ rig: await findRig(crew.id, rigId), revision: await findRevision(crew.id, rigId, revisionId) }, { status: 201 });
 });
