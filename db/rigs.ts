@@ -162,6 +162,10 @@ export async function createRig(
       action: "rig_started",
       detail: reusedFromRevisionId ? { reusedFrom: reusedFromRevisionId } : null,
     });
+    if (reusedFromRevisionId) {
+      const source = await trx("rig_revisions").where({ crew_id: crewId, id: reusedFromRevisionId }).first("rig_id");
+      await recordStep(trx, actor, { crewId, rigId: source.rig_id, revisionId: reusedFromRevisionId, action: "reused", detail: { newRigId: rigId } });
+    }
     return { rigId, revisionId };
   });
 }
