@@ -1,5 +1,6 @@
 "use client";
 
+import { when } from "@/lib/when";
 import { useState } from "react";
 import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
@@ -15,8 +16,6 @@ import type { RevisionBody } from "@/lib/planner/saved-revision";
 export function modelNamer(catalogue: KitCatalogue, snapshots: readonly RevisionSnapshot[]) {
   return (id: string) => catalogue.models.find((m) => m.id === id)?.name ?? snapshots.flatMap((s) => s.gear).find((g) => g.modelId === id)?.name;
 }
-
-const when = (iso: string) => new Date(iso).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" });
 
 function useRevision(rigId: string, id: string | undefined) {
   return useQuery({
