@@ -41,7 +41,7 @@ export function ReuseForm({
     >
       <Field label="Name of the new rig" value={name} onChange={(e) => setName(e.target.value)} error={errors.fields.name} maxLength={120} />
       <Select
-        label="Site"
+        label="Site of the new rig"
         value={site}
         onChange={(e) => setSite(e.target.value)}
         error={errors.fields.siteId}

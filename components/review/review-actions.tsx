@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { useRouter } from "next/navigation";
+import { useQueryClient } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
 import { TextArea } from "@/components/ui/field";
 import { FormError } from "@/components/forms/form-error";
@@ -10,6 +11,7 @@ import { callApi } from "@/components/forms/call-api";
 /** One review step sent to the rig's review route; the page reloads its figures from the server after. */
 export function useReviewStep(rigId: string, revisionId: string) {
   const router = useRouter();
+  const client = useQueryClient();
   const [error, setError] = useState<string | null>(null);
   const [fieldError, setFieldError] = useState<string | undefined>();
   const [busy, setBusy] = useState(false);
@@ -24,6 +26,8 @@ export function useReviewStep(rigId: string, revisionId: string) {
     setError(null);
     setFieldError(undefined);
     then?.(answer.body);
+    // The revision's state shows in the history list too, which the client fetched itself.
+    void client.invalidateQueries({ queryKey: ["rig", rigId] });
     router.refresh();
   };
   return { send, error, fieldError, busy };

@@ -1,6 +1,7 @@
 "use client";
 
 import { useState } from "react";
+import { useRouter } from "next/navigation";
 import { Button } from "@/components/ui/button";
 import { TextArea } from "@/components/ui/field";
 import { FormError } from "@/components/forms/form-error";
@@ -8,6 +9,8 @@ import { useReviewStep } from "./review-actions";
 
 /** The lead's two answers to a revision in review: sign it off with the statement confirmed, or return it with comments. */
 export function ReviewForm({ rigId, revisionId, statement, refusal }: { rigId: string; revisionId: string; statement: string; refusal: string | null }) {
+  const router = useRouter();
+  const toRig = () => router.push(`/rigs/${rigId}`);
   const sign = useReviewStep(rigId, revisionId);
   const back = useReviewStep(rigId, revisionId);
   const [confirmed, setConfirmed] = useState(false);
@@ -18,7 +21,7 @@ export function ReviewForm({ rigId, revisionId, statement, refusal }: { rigId: s
         className="space-y-3"
         onSubmit={(e) => {
           e.preventDefault();
-          void sign.send({ step: "sign", confirm: confirmed });
+          void sign.send({ step: "sign", confirm: confirmed }, toRig);
         }}
       >
         <h3 className="font-semibold">Sign off</h3>
@@ -36,7 +39,7 @@ export function ReviewForm({ rigId, revisionId, statement, refusal }: { rigId: s
         className="space-y-3"
         onSubmit={(e) => {
           e.preventDefault();
-          void back.send({ step: "return", note: comments });
+          void back.send({ step: "return", note: comments }, toRig);
         }}
       >
         <h3 className="font-semibold">Return it to draft</h3>

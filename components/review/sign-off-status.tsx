@@ -1,8 +1,10 @@
 import Link from "next/link";
 import type { SignOff } from "@/db/reviews";
 import type { Verification } from "@/lib/review/verification";
-import { REVISION_STATE_LABELS, type RevisionMeta } from "@/lib/validations/rigs";
+import type { RevisionMeta, RevisionState } from "@/lib/validations/rigs";
 import { when } from "@/lib/when";
+
+const STATE_PHRASES: Record<RevisionState, string> = { draft: "a draft", in_review: "in review", signed_off: "signed off", superseded: "superseded" };
 
 function Reevaluated({ verification }: { verification: Verification }) {
   const r = verification.reevaluation;
@@ -86,13 +88,16 @@ export function SignOffStatus({
             )
           ) : null}
           {verification ? <Reevaluated verification={verification} /> : null}
+          <p>
+            <a href="#on-site">On site: the checklist and load-cell readings</a>
+          </p>
         </>
       ) : (
         <p className="font-semibold">No revision of this rig is signed off yet: nobody should walk it until a lead signs it off.</p>
       )}
       {latestUnsigned ? (
         <p className={signOff ? "font-semibold text-caution-800" : undefined}>
-          Revision {latest.number}, the latest, is {REVISION_STATE_LABELS[latest.state].toLowerCase()} and is not signed off
+          Revision {latest.number}, the latest, is {STATE_PHRASES[latest.state]} and is not signed off
           {latest.state === "in_review" ? (
             <>
               : <Link href={`/rigs/${rigId}/review`}>see the review</Link>.

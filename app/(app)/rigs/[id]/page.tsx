@@ -85,15 +85,10 @@ export default async function RigPage({ params, searchParams }: { params: Promis
             Started from <Link href={`/rigs/${review.reusedFrom.rigId}`}>{review.reusedFrom.rigName}</Link>, signed-off revision {review.reusedFrom.number}.
           </p>
         ) : null}
-        {isHead && rig.head.state === "draft" && can(context.role, "rig.submit") ? (
-          <Panel title="Submit for review" id="submit">
-            <SubmitForReview rigId={rig.id} revisionId={rig.head.id} revisionNumber={rig.head.number} />
-          </Panel>
-        ) : null}
         {rig.head.state === "in_review" ? (
           <p className="rounded-panel border-2 border-info-700 bg-info-100 p-3">
-            Revision {rig.head.number} is in review: nobody changes the rig until a lead signs it off or returns it.{" "}
-            <Link href={`/rigs/${rig.id}/review`}>{can(context.role, "rig.sign") ? "Review it" : "See the review"}</Link>.
+            Revision {rig.head.number} is in review: the crew&apos;s leads and owners were asked to review it, and nobody changes the rig until one signs it off
+            or returns it. <Link href={`/rigs/${rig.id}/review`}>{can(context.role, "rig.sign") ? "Review it" : "See the review"}</Link>.
           </p>
         ) : null}
         <CautionNotice compact />
@@ -107,6 +102,11 @@ export default async function RigPage({ params, searchParams }: { params: Promis
           revision={{ ...saved, rigId: rig.id }}
           kitChanges={mode === "edit" ? kitChangesSince(revision.snapshot, data.catalogue) : []}
         />
+        {isHead && rig.head.state === "draft" && can(context.role, "rig.submit") ? (
+          <Panel title="Submit for review" id="submit">
+            <SubmitForReview rigId={rig.id} revisionId={rig.head.id} revisionNumber={rig.head.number} />
+          </Panel>
+        ) : null}
         {signed ? (
           <Panel title={`On site: signed-off revision ${signed.revisionNumber}`} id="on-site">
             <h3 className="font-semibold">Checklist</h3>
@@ -125,7 +125,7 @@ export default async function RigPage({ params, searchParams }: { params: Promis
             />
           </Panel>
         ) : null}
-        {signed && can(context.role, "rig.write") ? (
+        {signed && can(context.role, "rig.reuse") ? (
           <Panel title="Use this rig for another site or day" id="reuse">
             <p className="text-sm text-ink-600">
               Starts a new rig whose first draft is signed-off revision {signed.revisionNumber}, checked again with the Kit as it is now. It needs its own

@@ -13,7 +13,7 @@ type Params = { id: string; revisionId: string };
  * "Use this rig": a new rig whose first draft is a signed-off revision's plan, on another site or the
  * same one, checked again with the Kit as it is now. The new rig links back to the revision it came from.
  */
-export const POST = crewRoute<Params>("rig.write", async ({ crew, user }, request, { id, revisionId }) => {
+export const POST = crewRoute<Params>("rig.reuse", async ({ crew, user }, request, { id, revisionId }) => {
   const source = await findRevision(crew.id, rowId(id, "rig"), rowId(revisionId, "revision"));
   if (!source) throw new RequestError(404, "No such revision of this rig in this crew.");
   const body = await parseBody(request, ReuseSchema);
