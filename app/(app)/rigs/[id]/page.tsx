@@ -64,6 +64,10 @@ export default async function RigPage({ params, searchParams }: { params: Promis
           </>
         }
       />
+      <p className="-mt-4 mb-6 flex flex-wrap gap-x-5 gap-y-1 text-sm">
+        <Link href={`/rigs/${rig.id}/card?revision=${revision.id}`}>Rig card to print</Link>
+        <a href={`/api/rigs/${rig.id}/revisions/${revision.id}/card`}>Rig card as PDF</a>
+      </p>
       <div className="space-y-6">
         <CautionNotice compact />
         <Planner
