@@ -90,10 +90,12 @@ class Pen {
 }
 
 function rowsBlock(pen: Pen, rows: CardRow[], x: number, y: number, width: number, s: Sizes): number {
-  const labelWidth = width * 0.5;
-  const valueWidth = width - labelWidth - 6;
   let at = y;
   for (const row of rows) {
+    // The figure takes what it needs (up to 55 %), the label the rest: fewer wrapped lines.
+    pen.doc.font("bold").fontSize(s.body);
+    const valueWidth = Math.min(pen.doc.widthOfString(row.value) + 1, width * 0.55);
+    const labelWidth = width - valueWidth - 6;
     const h = Math.max(pen.height(row.label, "regular", s.body, labelWidth), pen.height(row.value, "bold", s.body, valueWidth));
     pen.text(row.label, x, at + s.gap / 2, row.alert ? "bold" : "regular", s.body, labelWidth);
     pen.text(row.value, x + labelWidth + 6, at + s.gap / 2, "bold", s.body, valueWidth, { align: "right" });
