@@ -8,14 +8,14 @@ interface AppShellProps {
   children: ReactNode;
 }
 
-/** The frame of every signed-in page: brand, crew switcher, account menu, sections, content. */
+/** The frame of every signed-in page: brand, crew switcher, account menu, sections, content; on paper only the content. */
 export function AppShell({ crewSwitcher, accountMenu, children }: AppShellProps) {
   return (
-    <div className="min-h-screen md:grid md:grid-cols-[theme(spacing.rail)_1fr]">
+    <div className="min-h-screen md:grid md:grid-cols-[theme(spacing.rail)_1fr] print:block print:min-h-0">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-3">
         Skip to content
       </a>
-      <header className="border-b border-ink-200 bg-white md:min-h-screen md:border-b-0 md:border-r">
+      <header className="border-b border-ink-200 bg-white md:min-h-screen md:border-b-0 md:border-r print:hidden">
         <div className="flex items-center justify-between gap-3 px-4 py-3 md:flex-col md:items-stretch">
           <Link href="/rigs" className="text-xl font-bold text-spruce-800 no-underline hover:no-underline">
             Spanwright
@@ -27,7 +27,7 @@ export function AppShell({ crewSwitcher, accountMenu, children }: AppShellProps)
           <AppNav />
         </div>
       </header>
-      <main id="main" className="mx-auto w-full max-w-page px-gutter py-6">
+      <main id="main" className="mx-auto w-full max-w-page px-gutter py-6 print:max-w-none print:p-0">
         {children}
       </main>
     </div>

@@ -78,6 +78,10 @@ export default async function RigPage({ params, searchParams }: { params: Promis
           </>
         }
       />
+      <p className="-mt-4 mb-6 flex flex-wrap gap-x-5 gap-y-1 text-sm">
+        <Link href={`/rigs/${rig.id}/card?revision=${revision.id}`}>Rig card to print</Link>
+        <a href={`/api/rigs/${rig.id}/revisions/${revision.id}/card`}>Rig card as PDF</a>
+      </p>
       <div className="space-y-6">
         <SignOffStatus rigId={rig.id} signOff={signed} verification={review.verification} latest={rig.head} />
         {review.reusedFrom ? (
