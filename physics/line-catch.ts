@@ -5,6 +5,7 @@ import { describeEquilibrium, type LineSolution } from "./solve-line";
 
 /** Where a neighbouring catch ended, to start the next one from: it saves iterations, never changes the answer. */
 export interface CatchHint {
+  x: number;
   unloaded: LineVariables;
   loaded: LineVariables;
   deflection: number;
@@ -37,7 +38,11 @@ export function catchOnLine(
 ): LineCatch {
   const forceDeflection = lineForceDeflection(line, length, x, breakingStrength, hint);
   const freeFall = fallHeight(forceDeflection.unloadedY);
-  const peak = leashFallPeak(mass, freeFall, forceDeflection.state, hint?.deflection);
+  // A taut line's stiffness under a point load goes as 1 / (x(D − x)), and a hard fall's deflection as the
+  // root of the compliance: the neighbour's deflection scaled so (a guess only).
+  const shape = (at: number) => Math.sqrt(at * (line.span - at));
+  const guess = hint && hint.x > 0 && hint.x < line.span ? (hint.deflection * shape(x)) / shape(hint.x) : undefined;
+  const peak = leashFallPeak(mass, freeFall, forceDeflection.state, guess);
   const loaded = forceDeflection.variablesAt(peak.deflection);
   return {
     ...peak,
@@ -45,6 +50,6 @@ export function catchOnLine(
     fallHeight: freeFall,
     unloadedY: forceDeflection.unloadedY,
     caught: describeEquilibrium(line, loaded, 0),
-    hint: { unloaded: forceDeflection.unloaded, loaded, deflection: peak.deflection },
+    hint: { x, unloaded: forceDeflection.unloaded, loaded, deflection: peak.deflection },
   };
 }
