@@ -9,17 +9,18 @@ import { STANDARD_GRAVITY } from "./units";
 // catches the walker alone. The broken mainline's weight is not carried by the backup (its ends hang from
 // the anchors); the ring slides freely, so the walker is caught where the fall began.
 
+/** Why the backup's catch cannot be worked out, or null when it can (it needs the backup's stretch points and slack). */
+export function backupCatchMissing(rig: RigInput): string | null {
+  if (!rig.backup) return "No backup given: its catch is not worked out.";
+  if (!rig.backup.stretchPoints) return "No stretch points for the backup: its catch is not worked out.";
+  if (rig.backup.slackM === undefined) return "No slack given for the backup (its length over the mainline's): its catch is not worked out.";
+  return null;
+}
+
 /** The backup as a line of its own once the mainline has failed: its own weight, curve and length (the mainline's + slack). */
 export function backupLine(rig: RigInput, mainLength: number): { name: string; line: Line; length: number; mbs: number; slack: number } | null {
   const b = rig.backup;
-  if (!b?.stretchPoints) return null;
-  if (b.slackM === undefined) {
-    throw new RigInputError(
-      "backup.slackM",
-      b.slackM,
-      "a slack from 0 m to 100 m (the backup's length over the mainline's), needed with the backup's stretch points",
-    );
-  }
+  if (!b?.stretchPoints || b.slackM === undefined) return null;
   const line: Line = {
     span: rig.spanM,
     rise: rig.heightDifferenceM,

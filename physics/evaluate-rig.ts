@@ -1,6 +1,6 @@
 import { cutDown, roundUp } from "./display";
 import { anchorLoads, type AnchorLoads } from "./bridle";
-import { backupFreeFall, backupLine } from "./backup-catch";
+import { backupCatchMissing, backupFreeFall, backupLine } from "./backup-catch";
 import { checkBrake, type BrakeCheck } from "./brake-check";
 import { CAUTIONS } from "./cautions";
 import { lowestClearance, RULE_OF_THUMB, type LowestClearance } from "./clearance";
@@ -387,11 +387,7 @@ export function evaluateRig(input: unknown): RigResult {
             extrapolated: backupCatch.caught.extrapolated,
           }
         : null,
-    backupCatchMissing: backup
-      ? null
-      : rig.backup
-        ? "No stretch points for the backup: its catch is not worked out."
-        : "No backup given: its catch is not worked out.",
+    backupCatchMissing: backupCatchMissing(rig),
     clearance,
     tensioning: { ...tensioning, brakeForceAtPretensionN: rig.pretension.forceN / tensioning.brakeAdvantage },
     brake: { ...brake, peakLineTensionN: peakAtTensioner },

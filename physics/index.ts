@@ -30,7 +30,7 @@ export { leashFallPeak, type LeashFallPeak } from "./leash-fall";
 export { lineForceDeflection, type LineForceDeflection, type LoadPathState } from "./line-force-deflection";
 export { lineEnergy, strainEnergyDensity } from "./line-energy";
 export { catchOnLine, type LineCatch, type CatchHint } from "./line-catch";
-export { backupLine, backupFreeFall } from "./backup-catch";
+export { backupLine, backupFreeFall, backupCatchMissing } from "./backup-catch";
 export { checkGround, groundHeightAt, type GroundPoint } from "./ground";
 export { lowestClearance, monotoneCubic, RULE_OF_THUMB, DEFAULT_MINIMUM_CLEARANCE_M, type LowestClearance } from "./clearance";
 export { analysePulleySystem, checkPulleySystem, type PulleySystem, type PulleyAnalysis, type BrakeLocation } from "./pulley-system";

@@ -113,9 +113,14 @@ describe("the backup catch", () => {
     expect(result.safetyFactors.some((f) => f.location === "backup")).toBe(false);
   });
 
+  it("is null without the backup's slack, and says so (a rig saved before the slack was asked for still evaluates)", () => {
+    const result = evaluateRig({ ...withGround, backup: { ...withGround.backup, slackM: undefined } });
+    expect(result.backupCatch).toBeNull();
+    expect(result.backupCatchMissing).toMatch(/No slack given for the backup/);
+  });
+
   it.each([
     ["a negative slack", { slackM: -0.5 }, "backup.slackM"],
-    ["no slack with a stretch curve", { slackM: undefined }, "backup.slackM"],
     [
       "a curve that is not increasing",
       {
