@@ -24,7 +24,8 @@ function Figures({ rows }: { rows: [string, ReactNode][] }) {
   );
 }
 
-const where = (f: SafetyFactor) => (f.location === "line" ? "Line" : `Anchor ${f.location.toUpperCase()}`);
+const WHERE: Record<SafetyFactor["location"], string> = { line: "Line", backup: "Backup, at its catch", a: "Anchor A", b: "Anchor B" };
+const where = (f: SafetyFactor) => WHERE[f.location];
 
 function SafetyFactorTable({ factors, units }: { factors: SafetyFactor[]; units: UnitSystem }) {
   return (
