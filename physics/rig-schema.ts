@@ -9,7 +9,8 @@ const name = (what: string) =>
   z
     .string({ error: `${what} (text)` })
     .trim()
-    .min(1, `${what} (text)`);
+    .min(1, `${what} (text)`)
+    .max(200, `${what} (text of at most 200 characters)`);
 
 const stretchPoint = z.object({
   tensionKN: number("a tension ≥ 0 kN").gte(0, "a tension ≥ 0 kN"),
@@ -36,14 +37,14 @@ const anchor = z.object({
     ],
     { error: '{ "kind": "single" } or { "kind": "bridle", "includedAngleDeg": … }' },
   ),
-  components: z.array(component, { error: "a list of components" }).default([]),
+  components: z.array(component, { error: "a list of components" }).max(20, "at most 20 components").default([]),
 });
 
 const minimum = (category: keyof typeof DEFAULT_MINIMUM_FACTORS) => positive("a minimum safety factor > 0").default(DEFAULT_MINIMUM_FACTORS[category]);
 
 /** The inputs of one rig, SI units throughout (N, m, kg) except the stretch points (kN, %), as measured. */
 export const RigInputSchema = z.object({
-  name: z.string().optional(),
+  name: z.string().max(200, "a rig name of at most 200 characters").optional(),
   spanM: positive(`a horizontal span > 0 m and ≤ ${MAX_SPAN} m`).lte(MAX_SPAN, `a horizontal span > 0 m and ≤ ${MAX_SPAN} m`),
   /** Height of anchor B above anchor A, m (negative if B is lower). */
   heightDifferenceM: number("a height difference in m (B above A positive)").default(0),
@@ -51,7 +52,10 @@ export const RigInputSchema = z.object({
     name: name("a webbing name"),
     massPerMetreKg: positive("a mass per metre > 0 kg/m"),
     mbsN: positive("a minimum breaking strength > 0 N"),
-    stretchPoints: z.array(stretchPoint, { error: "a list of { tensionKN, elongationPct } points" }).min(2, "at least two points, the first at 0 kN and 0 %"),
+    stretchPoints: z
+      .array(stretchPoint, { error: "a list of { tensionKN, elongationPct } points" })
+      .min(2, "at least two points, the first at 0 kN and 0 %")
+      .max(50, "at most 50 points"),
   }),
   /** A backup that rides along adds its weight; it carries no tension until the mainline fails. */
   backup: z
@@ -102,7 +106,8 @@ export const RigInputSchema = z.object({
             .lte(20, "a whole number from 1 to 20"),
         }),
       )
-      .min(1, "at least one stage"),
+      .min(1, "at least one stage")
+      .max(8, "at most 8 stages"),
     sheaveEfficiency: positive("a sheave efficiency > 0 and ≤ 1").lte(1, "a sheave efficiency > 0 and ≤ 1"),
     brake: z.discriminatedUnion(
       "on",
@@ -128,6 +133,7 @@ export const RigInputSchema = z.object({
         forceN: positive("a force > 0 N"),
       }),
     )
+    .max(200, "at most 200 slip results")
     .default([]),
   /** The crew's minimum safety factors; defaults are common practice, no source. */
   minimumSafetyFactors: z
