@@ -1,5 +1,5 @@
 // Which address a request came from, for the sign-in limits. X-Forwarded-For ends with the socket's own peer
-// (instrumentation.ts appends it); each proxy named in TRUSTED_PROXIES (comma-separated addresses) may have
+// (lib/server-edge.ts appends it); each proxy named in TRUSTED_PROXIES (comma-separated addresses) may have
 // added the one before it. The first entry from the right that is not a trusted proxy is the client: anything
 // left of it was written by the client and proves nothing.
 
