@@ -9,6 +9,7 @@ export const SERVER_LIB = [
   "lib/auth/{current-password,lucia,passwords,require-signed-in,session}.ts",
   "lib/mail/**",
   "lib/planner/{catalogue,page-data,revision-of-record}.ts",
+  "lib/review/{rig-review-data,on-site-answer}.ts",
 ];
 
 const APP_LAYERS = ["components/**", "app/**"];

@@ -7,6 +7,7 @@ import type { RevisionMeta, RigListQuery } from "@/lib/validations/rigs";
 export type { RevisionMeta };
 import type { RevisionSnapshot } from "@/lib/planner/kit";
 import { revisionRow, type NewRevision } from "@/lib/planner/revision-row";
+import { recordStep, type Actor } from "./audit-log";
 
 export type { NewRevision };
 
@@ -27,6 +28,8 @@ export interface RigRow {
   siteName: string | null;
   startedBy: string | null;
   createdAt: string;
+  /** The signed-off revision this rig was started from, if it was. */
+  reusedFromRevisionId: string | null;
   revisionCount: number;
   head: RevisionMeta;
 }
@@ -40,6 +43,7 @@ const metaColumns = (table: string) => [
   db.raw(`${table}.span_m as "spanM"`),
   db.raw(`${table}.mainline_name as "mainlineName"`),
   db.raw(`${table}.created_at as "createdAt"`),
+  db.raw(`${table}.author_id as "authorId"`),
 ];
 
 const revisionsOf = (crewId: string, rigId: string) =>
@@ -65,8 +69,8 @@ export async function findRevision(crewId: string, rigId: string, revisionId: st
   return row ?? null;
 }
 
-async function headOf(trx: Knex | Knex.Transaction, crewId: string, rigId: string): Promise<{ id: string; number: number } | null> {
-  return (await trx("rig_revisions").where({ crew_id: crewId, rig_id: rigId }).orderBy("number", "desc").first("id", "number")) ?? null;
+async function headOf(trx: Knex | Knex.Transaction, crewId: string, rigId: string): Promise<{ id: string; number: number; state: string } | null> {
+  return (await trx("rig_revisions").where({ crew_id: crewId, rig_id: rigId }).orderBy("number", "desc").first("id", "number", "state")) ?? null;
 }
 
 // The rigs list reads each rig with its current revision (the highest number) beside it.
@@ -88,10 +92,11 @@ const rigColumns = [
   db.raw('sites.name as "siteName"'),
   db.raw('starter.name as "startedBy"'),
   db.raw('rigs.created_at as "createdAt"'),
+  db.raw('rigs.reused_from_revision_id as "reusedFromRevisionId"'),
   db.raw('(select count(*)::int from rig_revisions c where c.crew_id = rigs.crew_id and c.rig_id = rigs.id) as "revisionCount"'),
   db.raw(
     `json_build_object('id', head.id, 'number', head.number, 'state', head.state, 'basedOnId', head.based_on_id, 'engineVersion', head.engine_version,
-      'spanM', head.span_m, 'mainlineName', head.mainline_name, 'authorName', author.name, 'createdAt', head.created_at) as head`,
+      'spanM', head.span_m, 'mainlineName', head.mainline_name, 'authorId', head.author_id, 'authorName', author.name, 'createdAt', head.created_at) as head`,
   ),
 ];
 
@@ -137,33 +142,67 @@ export async function findRig(crewId: string, id: string): Promise<RigRow | null
   return (await rigsWithHead(crewId).where("rigs.id", id).first(rigColumns)) ?? null;
 }
 
-export async function createRig(crewId: string, userId: string, revision: NewRevision): Promise<{ rigId: string; revisionId: string }> {
+/** Starts a rig with its first revision; `reusedFromRevisionId` links a rig started from a signed-off one ("use this rig"). */
+export async function createRig(
+  crewId: string,
+  actor: Actor,
+  revision: NewRevision,
+  reusedFromRevisionId: string | null = null,
+): Promise<{ rigId: string; revisionId: string }> {
   return db.transaction(async (trx) => {
-    const [{ id: rigId }] = await trx("rigs").insert({ crew_id: crewId, site_id: revision.siteId, name: revision.name, created_by: userId }).returning("id");
-    const [{ id: revisionId }] = await trx("rig_revisions")
-      .insert({ ...revisionRow(crewId, rigId, userId, revision), number: 1 })
+    const [{ id: rigId }] = await trx("rigs")
+      .insert({ crew_id: crewId, site_id: revision.siteId, name: revision.name, created_by: actor.id, reused_from_revision_id: reusedFromRevisionId })
       .returning("id");
+    const [{ id: revisionId }] = await trx("rig_revisions")
+      .insert({ ...revisionRow(crewId, rigId, actor.id, revision), number: 1 })
+      .returning("id");
+    await recordStep(trx, actor, {
+      crewId,
+      rigId,
+      revisionId,
+      action: "rig_started",
+      detail: reusedFromRevisionId ? { reusedFrom: reusedFromRevisionId } : null,
+    });
+    if (reusedFromRevisionId) {
+      const source = await trx("rig_revisions").where({ crew_id: crewId, id: reusedFromRevisionId }).first("rig_id");
+      await recordStep(trx, actor, { crewId, rigId: source.rig_id, revisionId: reusedFromRevisionId, action: "reused", detail: { newRigId: rigId } });
+    }
     return { rigId, revisionId };
   });
 }
 
-export type RevisionSave = { outcome: "saved"; revisionId: string } | { outcome: "stale"; currentId: string } | { outcome: "not_found" };
+export type RevisionSave =
+  { outcome: "saved"; revisionId: string } | { outcome: "stale"; currentId: string } | { outcome: "in_review"; number: number } | { outcome: "not_found" };
 
 /**
  * Saves a new revision on top of `basedOnId`. The rig's row is locked first, so of two saves based on
  * the same revision exactly one lands; the other learns which revision is current now.
  */
-export async function saveRevision(crewId: string, rigId: string, userId: string, basedOnId: string, revision: NewRevision): Promise<RevisionSave> {
+export async function saveRevision(crewId: string, rigId: string, actor: Actor, basedOnId: string, revision: NewRevision): Promise<RevisionSave> {
   return db.transaction(async (trx) => {
     const rig = await trx("rigs").where({ crew_id: crewId, id: rigId }).forUpdate().first("id");
     if (!rig) return { outcome: "not_found" };
     const head = await headOf(trx, crewId, rigId);
     if (!head) return { outcome: "not_found" };
     if (head.id !== basedOnId) return { outcome: "stale", currentId: head.id };
+    // A revision in review is what the lead is reading: it is returned or signed off before the rig changes.
+    if (head.state === "in_review") return { outcome: "in_review", number: head.number };
     const [{ id }] = await trx("rig_revisions")
-      .insert({ ...revisionRow(crewId, rigId, userId, revision), number: head.number + 1, based_on_id: basedOnId })
+      .insert({ ...revisionRow(crewId, rigId, actor.id, revision), number: head.number + 1, based_on_id: basedOnId })
       .returning("id");
     await trx("rigs").where({ crew_id: crewId, id: rigId }).update({ name: revision.name, site_id: revision.siteId });
+    await recordStep(trx, actor, { crewId, rigId, revisionId: id, action: "revision_saved" });
     return { outcome: "saved", revisionId: id };
   });
+}
+
+/** Where a revision belongs: its rig's id and name and its number (for links to a reused rig's source). */
+export async function revisionPlace(crewId: string, revisionId: string): Promise<{ rigId: string; rigName: string; number: number } | null> {
+  const row = await db("rig_revisions")
+    .join("rigs", function () {
+      this.on("rigs.id", "=", "rig_revisions.rig_id").andOn("rigs.crew_id", "=", "rig_revisions.crew_id");
+    })
+    .where({ "rig_revisions.crew_id": crewId, "rig_revisions.id": revisionId })
+    .first(db.raw('rigs.id as "rigId"'), db.raw('rigs.name as "rigName"'), "rig_revisions.number");
+  return row ?? null;
 }

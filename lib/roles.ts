@@ -16,6 +16,11 @@ export const PERMISSIONS = {
   "rig.write": "rigger",
   "site.read": "member",
   "site.write": "rigger",
+  "rig.submit": "rigger",
+  "rig.sign": "lead",
+  "checklist.template": "lead",
+  "checklist.run": "member",
+  "reading.write": "member",
 } as const satisfies Record<string, Role>;
 
 export type Action = keyof typeof PERMISSIONS;
@@ -38,6 +43,11 @@ export const ACTION_WORDS: Record<Action, string> = {
   "rig.write": "plan and save rigs",
   "site.read": "read the crew's sites",
   "site.write": "add and change sites",
+  "rig.submit": "submit rigs for review",
+  "rig.sign": "sign rigs off or return them to their riggers",
+  "checklist.template": "change the crew's on-site checklist",
+  "checklist.run": "run the on-site checklist",
+  "reading.write": "record load-cell readings",
 };
 
 /** "a member", "an owner". */

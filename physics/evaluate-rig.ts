@@ -12,9 +12,9 @@ import { RigInputError } from "./rig-input-error";
 import type { RigInput } from "./rig-schema";
 import { safetyFactors, type LoadedComponent, type SafetyFactor } from "./safety-factors";
 import { solveLine, type LineSolution } from "./solve-line";
-import { createStretchCurve } from "./stretch-curve";
 import { sweepWalker, type Sweep } from "./sweep";
 import { lengthForPretension } from "./unstretched-length";
+import { rigLine } from "./rig-line";
 import { STANDARD_GRAVITY } from "./units";
 import { ENGINE_VERSION } from "./version";
 
@@ -136,13 +136,7 @@ export function evaluateRig(input: unknown): RigResult {
   if (rig.pretension.forceN >= mbs) {
     throw new RigInputError("pretension.forceN", rig.pretension.forceN, `a pretension > 0 N and below the mainline's MBS, ${mbs} N`);
   }
-  const backupMass = rig.backup?.ridesAlong ? rig.backup.massPerMetreKg : 0;
-  const line: Line = {
-    span: rig.spanM,
-    rise: rig.heightDifferenceM,
-    weight: (rig.mainline.massPerMetreKg + backupMass) * STANDARD_GRAVITY,
-    curve: createStretchCurve(rig.mainline.stretchPoints, "mainline.stretchPoints"),
-  };
+  const line = rigLine(rig);
   const walkerX = walkerPosition(rig);
   const walkerLoad = rig.walker.massKg * STANDARD_GRAVITY;
   const fall = fallHeight(rig);

@@ -43,4 +43,6 @@ export { detectSlip, type Trace, type SlipOnset } from "./slip-detection";
 export { CAUTIONS } from "./cautions";
 export { RigInputSchema, type RigInput, type RigInputDraft } from "./rig-schema";
 export { parseRigInput } from "./parse-rig-input";
+export { rigLine } from "./rig-line";
+export { tensionForSag, tensionWithWalker } from "./measured-tension";
 export { evaluateRig, type RigResult, type LineState, type AnchorResult } from "./evaluate-rig";

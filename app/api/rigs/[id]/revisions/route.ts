@@ -21,8 +21,14 @@ export const POST = crewRoute<Params>("rig.write", async ({ crew, user }, reques
   const body = await parseBody(request, NewRevisionSchema);
   if (!(await findRig(crew.id, rigId))) throw missing();
   const revision = await revisionOfRecord(crew.id, crew.units, body);
-  const saved = await saveRevision(crew.id, rigId, user.id, body.basedOnRevisionId, revision);
+  const saved = await saveRevision(crew.id, rigId, user, body.basedOnRevisionId, revision);
   if (saved.outcome === "not_found") throw missing();
+  if (saved.outcome === "in_review") {
+    throw new RequestError(
+      409,
+      `Revision ${saved.number} is in review, so the rig cannot change until a lead signs it off or returns it. Your edits are kept on this page.`,
+    );
+  }
   if (saved.outcome === "stale") {
     const current = await findRevision(crew.id, rigId, saved.currentId);
     return NextResponse.json(
