@@ -59,12 +59,16 @@ type Segment<P> = { params: Promise<P> };
 /** Any route handler: origin check on mutating requests, and every error mapped to a clear answer. */
 export function route<P = Record<string, never>>(handler: (request: NextRequest, params: P) => Promise<Response>) {
   return async (request: NextRequest, segment: Segment<P>) => {
+    let response: Response;
     try {
       assertSameOrigin(request);
-      return await handler(request, await segment.params);
+      response = await handler(request, await segment.params);
     } catch (error) {
-      return errorResponse(error);
+      response = errorResponse(error);
     }
+    // Answers carry the caller's own data: no browser or proxy keeps a copy unless the route says otherwise.
+    if (!response.headers.has("cache-control")) response.headers.set("cache-control", "no-store");
+    return response;
   };
 }
 
