@@ -5,8 +5,8 @@ import nextTypescript from "eslint-config-next/typescript";
 // lib's shared modules (no I/O; they run in the browser too) import physics/ and each other; db/ imports
 // db/, physics/ and shared lib; lib's server modules below import any of those; components/ and app/ on top.
 export const SERVER_LIB = [
-  "lib/{api,app-origin,authz,rate-limit,storage}.ts",
-  "lib/auth/{lucia,passwords,require-signed-in,session}.ts",
+  "lib/{api,app-origin,authz,server-edge,rate-limit,storage,worker-pool}.ts",
+  "lib/auth/{current-password,lucia,passwords,require-signed-in,session}.ts",
   "lib/mail/**",
   "lib/planner/{catalogue,page-data,revision-of-record}.ts",
   "lib/review/{rig-review-data,on-site-answer}.ts",

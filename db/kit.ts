@@ -1,6 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import { db } from "./knex";
+import { isUniqueViolation } from "./errors";
 import type { GearItem, GearItemEdit, GearKind, GearModel, GearSpecs, Inspection, Retirement } from "@/lib/validations/kit";
 
 // The Kit's queries. Every one is scoped by crew id: another crew's rows are simply not found.
@@ -123,7 +124,7 @@ export async function findItem(crewId: string, id: string): Promise<GearItemRow 
 }
 
 /** True when the database refused a second item of the same model with the same label (migration 20261201000012). */
-const isDuplicateLabel = (error: unknown) => (error as { constraint?: string } | null)?.constraint === "gear_items_model_label";
+const isDuplicateLabel = (error: unknown) => isUniqueViolation(error, "gear_items_model_label");
 
 export type ItemCreation = GearItemRow | "model_not_found" | "model_retired" | "duplicate_label";
 

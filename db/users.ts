@@ -28,12 +28,13 @@ export async function createUser(input: { email: string; name: string; passwordH
   return rows[0] ?? null;
 }
 
-/** Renames and re-addresses the person; false when the new e-mail belongs to someone else. */
-export async function updateProfile(userId: string, input: { name: string; email: string }): Promise<boolean> {
-  const taken = await db("users").where({ email: input.email }).whereNot({ id: userId }).first("id");
-  if (taken) return false;
-  await db("users").where({ id: userId }).update({ name: input.name, email: input.email });
-  return true;
+export async function renameUser(userId: string, name: string): Promise<void> {
+  await db("users").where({ id: userId }).update({ name });
+}
+
+/** True when another account already signs in with this e-mail. */
+export async function emailTaken(email: string, exceptUserId: string): Promise<boolean> {
+  return Boolean(await db("users").where({ email: email.toLowerCase() }).whereNot({ id: exceptUserId }).first("id"));
 }
 
 /** Sets the password hash; inside a transaction pass it as `executor`, so the query runs on its connection. */

@@ -3,8 +3,10 @@ import { ZodError, type ZodType } from "zod";
 import { getCurrentSession, type SignedIn } from "./auth/session";
 import { authorize, AccessError, type CrewContext } from "./authz";
 import { RequestError, invalidInput } from "./http-errors";
+import { readJson } from "./request-body";
 import { RigInputError, SolveError } from "@/physics";
 import type { Action } from "./roles";
+import { allowedSentence, rigInputProblem } from "./planner/problems";
 
 const MUTATING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 
@@ -28,7 +30,16 @@ export function assertSameOrigin(request: Request): void {
 export function errorResponse(error: unknown): NextResponse {
   if (error instanceof ZodError) error = invalidInput(error);
   if (error instanceof AccessError) return NextResponse.json({ error: error.message }, { status: error.status });
-  if (error instanceof RigInputError) return NextResponse.json({ ...error.toJSON(), fieldErrors: { [error.field]: error.message } }, { status: 400 });
+  if (error instanceof RigInputError) {
+    // The engine's own input is in SI units; its field is named as the form labels it.
+    const problem = rigInputProblem(error, "si");
+    const body = {
+      ...error.toJSON(),
+      error: `The engine cannot check this rig. ${problem.sentence}`,
+      fieldErrors: { [error.field]: allowedSentence(problem.allowed) },
+    };
+    return NextResponse.json(body, { status: 400 });
+  }
   if (error instanceof SolveError)
     return NextResponse.json(
       { ...error.toJSON(), error: `The engine could not solve this rig: ${error.message}. No figures are given rather than unsure ones.` },
@@ -41,26 +52,23 @@ export function errorResponse(error: unknown): NextResponse {
   return NextResponse.json({ error: "Something went wrong on the server; nothing was saved. Try again." }, { status: 500 });
 }
 
-/** Reads a JSON body, answering 400 (not 500) when it is not JSON. */
-export async function readJson(request: Request): Promise<unknown> {
-  try {
-    return await request.json();
-  } catch {
-    throw new RequestError(400, "The request body is not valid JSON.");
-  }
-}
+export { readJson };
 
 type Segment<P> = { params: Promise<P> };
 
 /** Any route handler: origin check on mutating requests, and every error mapped to a clear answer. */
 export function route<P = Record<string, never>>(handler: (request: NextRequest, params: P) => Promise<Response>) {
   return async (request: NextRequest, segment: Segment<P>) => {
+    let response: Response;
     try {
       assertSameOrigin(request);
-      return await handler(request, await segment.params);
+      response = await handler(request, await segment.params);
     } catch (error) {
-      return errorResponse(error);
+      response = errorResponse(error);
     }
+    // Answers carry the caller's own data: no browser or proxy keeps a copy unless the route says otherwise.
+    if (!response.headers.has("cache-control")) response.headers.set("cache-control", "no-store");
+    return response;
   };
 }
 

@@ -3,7 +3,7 @@ import { ZodError } from "zod";
 /** A request the server understood but will not carry out: its status and what to tell the caller. */
 export class RequestError extends Error {
   constructor(
-    readonly status: 400 | 404 | 409 | 410 | 413 | 415 | 422 | 429,
+    readonly status: 400 | 404 | 409 | 410 | 413 | 415 | 422 | 429 | 503,
     message: string,
     readonly fieldErrors: Record<string, string> = {},
     readonly headers: Record<string, string> = {},

@@ -1,5 +1,6 @@
 import crypto from "node:crypto";
 import { RequestError } from "./http-errors";
+import { mebibytes, NUL_REFUSAL, readBodyBytes } from "./request-body";
 
 // What may be uploaded, how large, and how its type is told from its first bytes as well as its name.
 
@@ -109,26 +110,24 @@ export function checkFileSize(purpose: UploadPurpose, fileName: string, size: nu
   }
 }
 
-/** Refuses a body that announces itself as too large before any of it is read. */
-export function checkAnnouncedSize(request: Request, purpose: UploadPurpose): void {
-  const announced = Number(request.headers.get("content-length") ?? "0");
-  // Room for the multipart framing and the form's other fields.
-  if (announced > UPLOAD_LIMITS[purpose] + 64 * 1024) {
-    throw new RequestError(413, `The upload is ${(announced / MiB).toFixed(1)} MiB; ${purpose} files may be at most ${UPLOAD_LIMITS[purpose] / MiB} MiB.`);
-  }
-}
+const tooLargeUpload = (purpose: UploadPurpose) => (size: number) =>
+  new RequestError(413, `The upload is ${mebibytes(size)} or more; ${purpose} files may be at most ${UPLOAD_LIMITS[purpose] / MiB} MiB.`);
 
-/** Reads the multipart form of an upload, answering 400 (not 500) when it is not one. */
+/** Reads the multipart form of an upload, no more bytes than the purpose allows (announced or not), answering 400 (not 500) when it is not one. */
 export async function readUploadForm(request: Request, purpose: UploadPurpose): Promise<{ form: FormData; file: File; bytes: Uint8Array }> {
-  checkAnnouncedSize(request, purpose);
+  // Room for the multipart framing and the form's other fields.
+  const body = await readBodyBytes(request, UPLOAD_LIMITS[purpose] + 64 * 1024, tooLargeUpload(purpose));
   let form: FormData;
   try {
-    form = await request.formData();
+    form = await new Response(body, { headers: { "content-type": request.headers.get("content-type") ?? "" } }).formData();
   } catch {
     throw new RequestError(400, 'The upload must be sent as multipart/form-data with the file in a field named "file".');
   }
   const file = form.get("file");
   if (!(file instanceof File)) throw new RequestError(400, 'Choose a file to upload (the form field "file" is missing).');
+  if ([...form.keys()].some((key) => key.includes("\u0000")) || [...form.values()].some((v) => (typeof v === "string" ? v : v.name).includes("\u0000"))) {
+    throw new RequestError(400, NUL_REFUSAL);
+  }
   checkFileSize(purpose, file.name, file.size);
   return { form, file, bytes: new Uint8Array(await file.arrayBuffer()) };
 }

@@ -7,6 +7,7 @@ import * as uniqueItemLabels from "./20261201000012_unique_item_labels";
 import * as sitesAndRigs from "./20261201000020_sites_and_rigs";
 import * as crewMinimumClearance from "./20261202000030_crew_minimum_clearance";
 import * as reviewAndSignOff from "./20261202000040_review_and_sign_off";
+import * as emailChanges from "./20261202000050_email_changes";
 
 // Every migration, in order, imported statically so that the same list loads under tsx, Vitest
 // and the Next.js server bundle alike. A unit test checks that no file of this folder is missing.
@@ -19,6 +20,7 @@ const migrations: Record<string, Knex.Migration> = {
   "20261201000020_sites_and_rigs.ts": sitesAndRigs,
   "20261202000030_crew_minimum_clearance.ts": crewMinimumClearance,
   "20261202000040_review_and_sign_off.ts": reviewAndSignOff,
+  "20261202000050_email_changes.ts": emailChanges,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

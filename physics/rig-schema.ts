@@ -10,7 +10,8 @@ const name = (what: string) =>
   z
     .string({ error: `${what} (text)` })
     .trim()
-    .min(1, `${what} (text)`);
+    .min(1, `${what} (text)`)
+    .max(200, `${what} (text of at most 200 characters)`);
 
 const stretchPoint = z.object({
   tensionKN: number("a tension ≥ 0 kN").gte(0, "a tension ≥ 0 kN"),
@@ -49,14 +50,14 @@ const anchor = z.object({
     ],
     { error: '{ "kind": "single" } or { "kind": "bridle", "includedAngleDeg": … }' },
   ),
-  components: z.array(component, { error: "a list of components" }).default([]),
+  components: z.array(component, { error: "a list of components" }).max(20, "at most 20 components").default([]),
 });
 
 const minimum = (category: keyof typeof DEFAULT_MINIMUM_FACTORS) => positive("a minimum safety factor > 0").default(DEFAULT_MINIMUM_FACTORS[category]);
 
 /** The inputs of one rig, SI units throughout (N, m, kg) except the stretch points (kN, %), as measured. */
 export const RigInputSchema = z.object({
-  name: z.string().optional(),
+  name: z.string().max(200, "a rig name of at most 200 characters").optional(),
   spanM: positive(`a horizontal span > 0 m and ≤ ${MAX_SPAN} m`).lte(MAX_SPAN, `a horizontal span > 0 m and ≤ ${MAX_SPAN} m`),
   /** Height of anchor B above anchor A, m (negative if B is lower). */
   heightDifferenceM: number("a height difference in m (B above A positive)").default(0),
@@ -144,7 +145,8 @@ export const RigInputSchema = z.object({
             .lte(20, "a whole number from 1 to 20"),
         }),
       )
-      .min(1, "at least one stage"),
+      .min(1, "at least one stage")
+      .max(8, "at most 8 stages"),
     sheaveEfficiency: positive("a sheave efficiency > 0 and ≤ 1").lte(1, "a sheave efficiency > 0 and ≤ 1"),
     brake: z.discriminatedUnion(
       "on",
@@ -170,6 +172,7 @@ export const RigInputSchema = z.object({
         forceN: positive("a force > 0 N"),
       }),
     )
+    .max(200, "at most 200 slip results")
     .default([]),
   /** The crew's minimum brake margin (lowest slip ÷ force at the brake); default common practice, no source. */
   minimumBrakeMargin: positive("a minimum brake margin > 0").default(DEFAULT_MINIMUM_FACTORS.other),

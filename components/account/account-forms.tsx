@@ -15,9 +15,18 @@ export function ProfileForm({ name, email }: { name: string; email: string }) {
   const { form, submit, formError } = useApiForm(ProfileSchema, {
     url: "/api/account",
     method: "PATCH",
-    defaultValues: { name, email },
-    onSuccess: () => {
-      notify({ title: "Profile saved", tone: "ok" });
+    defaultValues: { name, email, currentPassword: "" },
+    // Sent only when the e-mail changes: a rename needs no password.
+    toBody: (values) => (values.email === email ? { name: values.name, email: values.email } : values),
+    onSuccess: (body) => {
+      if (body.pendingEmail) {
+        notify({
+          title: "Confirm the new e-mail",
+          description: `A link was sent to ${String(body.pendingEmail)}. Your account keeps ${email} until you open it (within one hour).`,
+          tone: "ok",
+        });
+        form.reset({ name: form.getValues("name"), email, currentPassword: "" });
+      } else notify({ title: "Profile saved", tone: "ok" });
       router.refresh();
     },
   });
@@ -26,6 +35,14 @@ export function ProfileForm({ name, email }: { name: string; email: string }) {
       <FormError message={formError} />
       <Field label="Name" autoComplete="name" error={form.formState.errors.name?.message} {...form.register("name")} />
       <Field label="E-mail" type="email" autoComplete="email" error={form.formState.errors.email?.message} {...form.register("email")} />
+      <Field
+        label="Current password"
+        type="password"
+        autoComplete="current-password"
+        hint="Needed only to change the e-mail. A link goes to the new address, and the change is made when it is opened."
+        error={form.formState.errors.currentPassword?.message}
+        {...form.register("currentPassword")}
+      />
       <Button type="submit" disabled={form.formState.isSubmitting}>
         Save profile
       </Button>

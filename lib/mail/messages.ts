@@ -37,6 +37,16 @@ export function passwordResetMail(input: { to: string; url: string }): OutgoingM
   );
 }
 
+export function emailChangeMail(input: { to: string; name: string; url: string }): OutgoingMail {
+  return compose(
+    input.to,
+    "Confirm your new Spanwright e-mail",
+    [`${input.name} asked to sign in to Spanwright with this address from now on.`],
+    { label: "Confirm this address", url: input.url },
+    "The link works once and for one hour. If you did not ask for it, ignore this message: no account changes.",
+  );
+}
+
 export function reviewRequestMail(input: {
   to: string;
   crewName: string;

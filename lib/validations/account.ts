@@ -7,6 +7,8 @@ export const email = z
   .string({ error: "Enter an e-mail address." })
   .trim()
   .toLowerCase()
+  // RFC 5321 allows a path of 256 octets, so an address of at most 254 characters.
+  .max(254, { error: "Use an e-mail address of at most 254 characters." })
   .pipe(z.email({ error: "That is not an e-mail address: use the form name@example.org." }));
 
 export const newPassword = z
@@ -33,9 +35,22 @@ export const ResetPasswordSchema = z.object({
   password: newPassword,
 });
 
-export const ProfileSchema = z.object({ name: personName, email });
+/** The current password is asked only when the e-mail changes. */
+export const ProfileSchema = z.object({
+  name: personName,
+  email,
+  currentPassword: z.string({ error: "Enter your current password." }).max(200, { error: "Use at most 200 characters." }).optional(),
+});
+
+const INCOMPLETE_CONFIRMATION = "The confirmation link is incomplete: open the link from the e-mail again.";
+export const ConfirmEmailSchema = z.object({
+  token: z.string({ error: INCOMPLETE_CONFIRMATION }).min(20, INCOMPLETE_CONFIRMATION).max(200, INCOMPLETE_CONFIRMATION),
+});
 
 export const ChangePasswordSchema = z.object({
-  currentPassword: z.string({ error: "Enter your current password." }).min(1, { error: "Enter your current password." }),
+  currentPassword: z
+    .string({ error: "Enter your current password." })
+    .min(1, { error: "Enter your current password." })
+    .max(200, { error: "Use at most 200 characters." }),
   newPassword,
 });

@@ -203,9 +203,15 @@ export type GearModelInput = z.input<(typeof GearModelSchema)["si"]>;
 export type GearModel = z.output<(typeof GearModelSchema)["si"]>;
 export type GearSpecs<K extends GearKind = GearKind> = z.output<ReturnType<typeof specSchemas>[K]>;
 
-/** A calendar date as the browser's date input gives it, not in the future. */
+/** No gear in service or test was recorded before this; earlier dates are typing slips (and year 0 does not exist). */
+export const EARLIEST_DATE = "1900-01-01";
+
+/** A calendar date as the browser's date input gives it, from EARLIEST_DATE up to today. */
 export const pastDate = (label: string) =>
-  z.iso.date({ error: `${label} must be a date (YYYY-MM-DD).` }).refine((d) => d <= new Date().toISOString().slice(0, 10), `${label} cannot be in the future.`);
+  z.iso
+    .date({ error: `${label} must be a date (YYYY-MM-DD).` })
+    .refine((d) => d >= EARLIEST_DATE, `${label} must be on or after ${EARLIEST_DATE}.`)
+    .refine((d) => d <= new Date().toISOString().slice(0, 10), `${label} cannot be in the future.`);
 
 export const GearItemSchema = z.object({
   modelId: z.uuid({ error: "Choose the gear model this item is." }),

@@ -67,6 +67,48 @@ describe("sign-in", () => {
     expect(blocked.headers.get("retry-after")).toBeTruthy();
   });
 
+  it("trusts only the proxy's own entry of X-Forwarded-For: rotating what the client wrote gives no more guesses", async () => {
+    // The test stack trusts a proxy on loopback (TRUSTED_PROXIES), which appends the address it saw last.
+    const client = new AppClient();
+    const seen = "203.0.113.91";
+    for (let i = 0; i < 20; i++) {
+      const forged = { "x-forwarded-for": `192.0.2.${i + 1}, ${seen}` };
+      expect((await client.post("/api/auth/sign-in", { email: unique("rotate"), password: "wrong" }, forged)).status).toBe(401);
+    }
+    const blocked = await client.post("/api/auth/sign-in", { email: unique("rotate"), password: "wrong" }, { "x-forwarded-for": `192.0.2.99, ${seen}` });
+    expect(blocked.status).toBe(429);
+  });
+
+  it("counts 50 parallel wrong passwords atomically: no more than 5 are checked", async () => {
+    const person = await createPerson("parallel-guess");
+    const client = new AppClient();
+    const guesses = await Promise.all(
+      Array.from({ length: 50 }, (_, i) => client.post("/api/auth/sign-in", { email: person.email, password: `guess-${i}` }, fromAddress())),
+    );
+    const statuses = guesses.map((g) => g.status);
+    expect(statuses.filter((s) => s === 401)).toHaveLength(5);
+    expect(statuses.filter((s) => s === 429)).toHaveLength(45);
+  });
+
+  it("refuses an e-mail over 254 characters with a 400 on the field, every time", async () => {
+    const long = `${"a".repeat(250)}@fixture.example`;
+    for (let i = 0; i < 3; i++) {
+      const response = await new AppClient().post("/api/auth/sign-in", { email: long, password: "wrong" }, fromAddress());
+      expect(response.status).toBe(400);
+      expect((await response.json()).fieldErrors.email).toBe("Use an e-mail address of at most 254 characters.");
+    }
+  });
+
+  it("limits reset mails to one address to 5 an hour, with the same answer for an address with no account", async () => {
+    const [person, ghost] = [await createPerson("reset-flood"), unique("ghost-flood")];
+    for (const email of [person.email, ghost]) {
+      for (let i = 0; i < 5; i++) expect((await new AppClient().post("/api/auth/forgot-password", { email })).status).toBe(200);
+      const refused = await new AppClient().post("/api/auth/forgot-password", { email });
+      expect(refused.status).toBe(429);
+      expect(refused.headers.get("retry-after")).toBeTruthy();
+    }
+  });
+
   it("refuses a mutating request without this site's Origin", async () => {
     const person = await createPerson("origin");
     const response = await fetch(new URL("/api/auth/sign-in", new AppClient().baseUrl), {

@@ -27,6 +27,7 @@ describe("POST /api/compute", () => {
     expect(body.field).toBe("spanM");
     expect(body.given).toBe("-5");
     expect(body.allowed).toBeTruthy();
+    expect(body.error).not.toMatch(/RigInputError/);
     expect((await rigger.post("/api/compute", "not json", { "content-type": "application/json" })).status).toBe(400);
   });
 

@@ -1,5 +1,6 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { AppClient } from "./support/http";
+import { latestMailTo, linkIn } from "./support/mailbox";
 import { createCrew, createPerson, FIXTURE_PASSWORD, testDb, type FixtureCrew } from "./support/fixtures";
 import { ROLES, type Role } from "@/lib/roles";
 
@@ -120,5 +121,23 @@ describe("invitations", () => {
       `${crew.people.rigger.name} (${crew.people.rigger.email}) is already in ${crew.name}, as a rigger: change their role in the People table instead of inviting them.`,
     );
     expect(await testDb("invitations").where({ crew_id: crew.id }).count<{ count: string }[]>({ count: "*" })).toEqual([{ count: "0" }]);
+  });
+});
+
+describe("accepting an invitation keeps the crew's owner", () => {
+  it("refuses the last owner an invitation to a lesser role in their own crew, leaving their role as it was", async () => {
+    const crew = await createCrew("last-owner-accept");
+    const owner = await AppClient.signedIn(crew.people.owner.email, FIXTURE_PASSWORD);
+    const address = `later-${crew.people.owner.email}`;
+    expect((await owner.post("/api/crew/invitations", { email: address, role: "member" })).status).toBe(201);
+    const token = linkIn(await latestMailTo(address), "/invitations/")
+      .pathname.split("/")
+      .pop()!;
+    // The owner then proves that address as their own (the link of an e-mail change).
+    await testDb("users").where({ id: crew.people.owner.id }).update({ email: address });
+    const accepted = await owner.post("/api/invitations/accept", { token });
+    expect(accepted.status).toBe(409);
+    expect((await accepted.json()).error).toMatch(/only owner/);
+    expect((await testDb("crew_members").where({ crew_id: crew.id, user_id: crew.people.owner.id }).first()).role).toBe("owner");
   });
 });

@@ -2,15 +2,30 @@ import fs from "node:fs/promises";
 import path from "node:path";
 import type { StoredMessage } from "@/lib/mail/mailbox";
 
-/** Waits for the newest message the local SMTP fake kept for this address. */
-export async function latestMailTo(address: string, timeoutMs = 5000): Promise<StoredMessage> {
+async function messagesTo(address: string): Promise<StoredMessage[]> {
   const dir = process.env.DEV_MAILBOX_DIR;
   if (!dir) throw new Error("DEV_MAILBOX_DIR is not set: run the suites with npm test.");
+  const files = (await fs.readdir(dir)).filter((f) => f.endsWith(".json"));
+  const messages = await Promise.all(files.map(async (f) => JSON.parse(await fs.readFile(path.join(dir, f), "utf8")) as StoredMessage));
+  return messages.filter((m) => m.to.includes(address)).sort((a, b) => b.id.localeCompare(a.id));
+}
+
+/** The tokens of the confirmation links in the first `count` messages to this address, once that many arrived. */
+export async function allLinksTo(address: string, count: number, timeoutMs = 5000): Promise<string[]> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
-    const files = (await fs.readdir(dir)).filter((f) => f.endsWith(".json"));
-    const messages = await Promise.all(files.map(async (f) => JSON.parse(await fs.readFile(path.join(dir, f), "utf8")) as StoredMessage));
-    const mine = messages.filter((m) => m.to.includes(address)).sort((a, b) => b.id.localeCompare(a.id));
+    const mine = await messagesTo(address);
+    if (mine.length >= count) return mine.map((m) => linkIn(m, "/confirm-email?token=").searchParams.get("token")!);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`Fewer than ${count} e-mails to ${address} arrived within ${timeoutMs} ms.`);
+}
+
+/** Waits for the newest message the local SMTP fake kept for this address. */
+export async function latestMailTo(address: string, timeoutMs = 5000): Promise<StoredMessage> {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const mine = await messagesTo(address);
     if (mine.length) return mine[0];
     await new Promise((r) => setTimeout(r, 100));
   }

@@ -1,19 +1,16 @@
 import { NextResponse } from "next/server";
 import { parseBody, signedInRoute } from "@/lib/api";
-import { RequestError } from "@/lib/http-errors";
 import { ChangePasswordSchema } from "@/lib/validations/account";
-import { findUserById, setPasswordHash } from "@/db/users";
-import { hashPassword, verifyPassword } from "@/lib/auth/passwords";
+import { setPasswordHash } from "@/db/users";
+import { hashPassword } from "@/lib/auth/passwords";
+import { assertCurrentPassword } from "@/lib/auth/current-password";
 import { lucia } from "@/lib/auth/lucia";
 import { startSession } from "@/lib/auth/session";
 
 // A changed password ends every other session and keeps this device signed in with a new one.
 export const POST = signedInRoute(async ({ user }, request) => {
   const { currentPassword, newPassword } = await parseBody(request, ChangePasswordSchema);
-  const row = await findUserById(user.id);
-  if (!row || !(await verifyPassword(row.password_hash, currentPassword))) {
-    throw new RequestError(400, "Your current password is not right.", { currentPassword: "This is not your current password." });
-  }
+  await assertCurrentPassword(user.id, currentPassword, "to choose a new one");
   await setPasswordHash(user.id, await hashPassword(newPassword));
   await lucia.invalidateUserSessions(user.id);
   await startSession(user.id, request.headers.get("user-agent"));

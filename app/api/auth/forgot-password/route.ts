@@ -7,10 +7,13 @@ import { newToken } from "@/lib/tokens";
 import { sendMail } from "@/lib/mail/transport";
 import { passwordResetMail } from "@/lib/mail/messages";
 import { appOrigin } from "@/lib/app-origin";
+import { spendAttempt } from "@/lib/rate-limit";
 
 // The same answer whether or not the address has an account, so the form cannot probe for accounts.
 export const POST = route(async (request) => {
   const { email } = await parseBody(request, ForgotPasswordSchema);
+  // Counted whether or not the address has an account, so the limit says nothing about accounts either.
+  await spendAttempt(["linkMail", email]);
   const user = await findUserByEmail(email);
   if (user) {
     const { token, tokenHash } = newToken();

@@ -10,6 +10,9 @@ import { newToken } from "@/lib/tokens";
 import { sendMail } from "@/lib/mail/transport";
 import { invitationMail } from "@/lib/mail/messages";
 import { appOrigin } from "@/lib/app-origin";
+import { spendAttempt } from "@/lib/rate-limit";
+
+const UNSENT = "The invitation mail could not be sent to this address, so no invitation was made: check the address and try again.";
 
 export const GET = crewRoute("crew.invite", async ({ crew }) => NextResponse.json({ invitations: await openInvitationsOf(crew.id) }));
 
@@ -20,9 +23,16 @@ export const POST = crewRoute("crew.invite", async ({ crew, user }, request) => 
     const message = `${member.name} (${email}) is already in ${crew.name}, as ${withArticle(member.role)}: change their role in the People table instead of inviting them.`;
     throw new RequestError(409, message, { email: message });
   }
+  await spendAttempt(["linkMail", email]);
   const { token, tokenHash } = newToken();
-  const invitation = await createInvitation({ crewId: crew.id, email, role, tokenHash, invitedBy: user.id });
   const url = `${appOrigin(request)}/invitations/${token}`;
-  await sendMail(invitationMail({ to: email, crewName: crew.name, inviterName: user.name, role, url, days: INVITATION_DAYS }));
+  const invitation = await createInvitation({ crewId: crew.id, email, role, tokenHash, invitedBy: user.id }, async () => {
+    try {
+      await sendMail(invitationMail({ to: email, crewName: crew.name, inviterName: user.name, role, url, days: INVITATION_DAYS }));
+    } catch (error) {
+      console.error("invitations: the mail relay refused the invitation:", error);
+      throw new RequestError(422, UNSENT, { email: UNSENT });
+    }
+  });
   return NextResponse.json({ invitation }, { status: 201 });
 });
