@@ -4,6 +4,7 @@ import path from "node:path";
 import PDFDocument from "pdfkit";
 import QRCode from "qrcode";
 import type { CardComponent, CardRow, CardSection, RigCardContent } from "./content";
+import { drawableText } from "./glyphs";
 
 // The rig card as a one-page A4 PDF, black on white, in the shipped Inter (static latin woff files, which
 // pdfkit embeds). Everything is laid out twice: measured at a type size, shrunk until it fits one page,
@@ -317,10 +318,27 @@ function cardDocument(content: RigCardContent): Doc {
 }
 
 /** Whether the card fits one page at some size (for the tests: the PDF is drawn at the smallest even when not). */
-export const rigCardFits = (content: RigCardContent) => fittingAttempt(cardDocument(content), new Map(), content) !== null;
+export const rigCardFits = (source: RigCardContent) => {
+  const content = drawableContent(source);
+  return fittingAttempt(cardDocument(content), new Map(), content) !== null;
+};
+
+/** The content with every text drawable in the shipped font; the footer says so when a name had to change. */
+function drawableContent(content: RigCardContent): RigCardContent {
+  let changed = false;
+  const drawn: RigCardContent = JSON.parse(JSON.stringify(content), (_key, value) => {
+    if (typeof value !== "string") return value;
+    const d = drawableText(value);
+    changed ||= d.changed;
+    return d.text;
+  });
+  if (changed) drawn.footer += " Letters this card's font does not have are written without their accents (or as ?): the print page shows names as saved.";
+  return drawn;
+}
 
 /** The rig card as PDF bytes: one A4 page. */
-export async function rigCardPdf(content: RigCardContent): Promise<Buffer> {
+export async function rigCardPdf(source: RigCardContent): Promise<Buffer> {
+  const content = drawableContent(source);
   const qr = await QRCode.toBuffer(content.rigUrl, { type: "png", errorCorrectionLevel: "M", margin: 1, scale: 6 });
   const doc = cardDocument(content);
   const measured = new Map<string, number>();

@@ -4,6 +4,7 @@ import { unit } from "mathjs";
 import example from "@/physics/examples/quarry-highline.json";
 import { CAUTIONS, evaluateRig, type RigResult } from "@/physics";
 import { rigCardContent, type RigCardContent, type RigCardSource } from "@/lib/rig-card/content";
+import { drawableText, isDrawn } from "@/lib/rig-card/glyphs";
 import { formatCapacity, formatDepth, formatLoad } from "@/lib/rig-form/format";
 
 const result = evaluateRig(example);
@@ -123,21 +124,32 @@ describe("the rig card's content", () => {
     expect(rowsOf(card({ revision: { ...revision, result: noBackup } }))["Backup catch"]).toBe("No backup given: its catch is not worked out.");
   });
 
+  // The subset's coverage as the font package states it (@fontsource/inter, 400.css: the latin block's unicode-range).
+  const css = fs.readFileSync("node_modules/@fontsource/inter/400.css", "utf8");
+  const ranges = css
+    .match(/inter-latin-400-normal\.woff2[^}]*unicode-range:\s*([^;]+);/)![1]
+    .split(",")
+    .map((r) =>
+      r
+        .trim()
+        .slice(2)
+        .split("-")
+        .map((h) => parseInt(h, 16)),
+    )
+    .map(([from, to]) => [from, to ?? from]);
+  const drawn = (c: string) => ranges.some(([from, to]) => c.codePointAt(0)! >= from && c.codePointAt(0)! <= to);
+
+  it("knows which characters the shipped font draws, as the font package states them", () => {
+    for (let code = 0; code <= 0xffff; code++) {
+      if (code >= 0xd800 && code <= 0xdfff) continue;
+      const c = String.fromCodePoint(code);
+      if (isDrawn(c) !== drawn(c)) expect.fail(`U+${code.toString(16)}: isDrawn ${isDrawn(c)}, the font package ${drawn(c)}`);
+    }
+    expect(drawableText("Łódź, Špičák, Ελλάδα")).toEqual({ text: "Lódz, Spicák, ??????", changed: true });
+    expect(drawableText("Foxglove gap — revision 2")).toEqual({ text: "Foxglove gap — revision 2", changed: false });
+  });
+
   it("writes only characters the shipped Inter latin subset draws", () => {
-    // The subset's coverage as the font package states it (@fontsource/inter, 400.css: the latin block's unicode-range).
-    const css = fs.readFileSync("node_modules/@fontsource/inter/400.css", "utf8");
-    const ranges = css
-      .match(/inter-latin-400-normal\.woff2[^}]*unicode-range:\s*([^;]+);/)![1]
-      .split(",")
-      .map((r) =>
-        r
-          .trim()
-          .slice(2)
-          .split("-")
-          .map((h) => parseInt(h, 16)),
-      )
-      .map(([from, to]) => [from, to ?? from]);
-    const drawn = (c: string) => ranges.some(([from, to]) => c.codePointAt(0)! >= from && c.codePointAt(0)! <= to);
     for (const units of ["si", "us"] as const) {
       for (const state of ["draft", "superseded", "signed_off"] as const) {
         const content = card({ units, revision: { ...revision, state }, signOff, standing: { ...signOff, revisionNumber: 3 } });
