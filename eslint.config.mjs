@@ -9,6 +9,7 @@ export const SERVER_LIB = [
   "lib/auth/{lucia,passwords,require-signed-in,session}.ts",
   "lib/mail/**",
   "lib/planner/{catalogue,page-data,revision-of-record}.ts",
+  "lib/review/{rig-review-data,on-site-answer}.ts",
   // The rig card is made on the server only (its route and print page), in the planner's own words (components/rigs/verdict-words.ts).
   "lib/rig-card/**",
 ];

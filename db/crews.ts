@@ -93,16 +93,23 @@ export async function changeMembership(crewId: string, userId: string, change: {
 export interface CrewSettingsRow {
   units: "si" | "us";
   minSafetyFactors: Record<string, number>;
+  /** Metres between a walker's lowest point after a fall and the ground. */
+  minClearanceM: number;
   allowSelfSignOff: boolean;
 }
 
 export async function crewSettings(crewId: string): Promise<CrewSettingsRow> {
-  const row = await db("crews").where({ id: crewId }).first("units", "min_safety_factors", "allow_self_sign_off");
-  return { units: row.units, minSafetyFactors: row.min_safety_factors, allowSelfSignOff: row.allow_self_sign_off };
+  const row = await db("crews").where({ id: crewId }).first("units", "min_safety_factors", "min_clearance_m", "allow_self_sign_off");
+  return { units: row.units, minSafetyFactors: row.min_safety_factors, minClearanceM: row.min_clearance_m, allowSelfSignOff: row.allow_self_sign_off };
 }
 
 export async function updateCrewSettings(crewId: string, settings: CrewSettingsRow): Promise<void> {
   await db("crews")
     .where({ id: crewId })
-    .update({ units: settings.units, min_safety_factors: JSON.stringify(settings.minSafetyFactors), allow_self_sign_off: settings.allowSelfSignOff });
+    .update({
+      units: settings.units,
+      min_safety_factors: JSON.stringify(settings.minSafetyFactors),
+      min_clearance_m: settings.minClearanceM,
+      allow_self_sign_off: settings.allowSelfSignOff,
+    });
 }

@@ -43,6 +43,7 @@ const metaColumns = (table: string) => [
   db.raw(`${table}.span_m as "spanM"`),
   db.raw(`${table}.mainline_name as "mainlineName"`),
   db.raw(`${table}.created_at as "createdAt"`),
+  db.raw(`${table}.author_id as "authorId"`),
 ];
 
 const revisionsOf = (crewId: string, rigId: string) =>
@@ -95,7 +96,7 @@ const rigColumns = [
   db.raw('(select count(*)::int from rig_revisions c where c.crew_id = rigs.crew_id and c.rig_id = rigs.id) as "revisionCount"'),
   db.raw(
     `json_build_object('id', head.id, 'number', head.number, 'state', head.state, 'basedOnId', head.based_on_id, 'engineVersion', head.engine_version,
-      'spanM', head.span_m, 'mainlineName', head.mainline_name, 'authorName', author.name, 'createdAt', head.created_at) as head`,
+      'spanM', head.span_m, 'mainlineName', head.mainline_name, 'authorId', head.author_id, 'authorName', author.name, 'createdAt', head.created_at) as head`,
   ),
 ];
 
@@ -162,6 +163,10 @@ export async function createRig(
       action: "rig_started",
       detail: reusedFromRevisionId ? { reusedFrom: reusedFromRevisionId } : null,
     });
+    if (reusedFromRevisionId) {
+      const source = await trx("rig_revisions").where({ crew_id: crewId, id: reusedFromRevisionId }).first("rig_id");
+      await recordStep(trx, actor, { crewId, rigId: source.rig_id, revisionId: reusedFromRevisionId, action: "reused", detail: { newRigId: rigId } });
+    }
     return { rigId, revisionId };
   });
 }

@@ -1,4 +1,4 @@
-import { COMPONENT_CATEGORIES, DEFAULT_MINIMUM_FACTORS, type ComponentCategory } from "@/physics";
+import { COMPONENT_CATEGORIES, DEFAULT_MINIMUM_FACTORS, type ComponentCategory, type RigInputDraft } from "@/physics";
 import type { GearKind } from "./validations/kit";
 import type { SafetyFactorClass } from "./validations/crew";
 
@@ -45,4 +45,15 @@ export function engineMinimums(crew: Partial<CrewMinimums>): Record<ComponentCat
     return own.length ? Math.max(...own) : DEFAULT_MINIMUM_FACTORS[category];
   };
   return Object.fromEntries(COMPONENT_CATEGORIES.map((category) => [category, strictest(category)])) as Record<ComponentCategory, number>;
+}
+
+/**
+ * Every crew minimum the engine takes: the safety factors in its categories, the brake's margin (the crew's
+ * minimum for brakes: lowest slip over the force at the brake) and the clearance below a fall.
+ */
+export function engineCrewMinimums(
+  crew: Partial<CrewMinimums>,
+  minClearanceM: number,
+): Pick<RigInputDraft, "minimumSafetyFactors" | "minimumBrakeMargin" | "minimumClearanceM"> {
+  return { minimumSafetyFactors: engineMinimums(crew), minimumBrakeMargin: orDefault(crew.brake, "other"), minimumClearanceM: minClearanceM };
 }

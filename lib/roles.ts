@@ -19,6 +19,7 @@ export const PERMISSIONS = {
   "rig.submit": "rigger",
   "rig.sign": "lead",
   "checklist.template": "lead",
+  "rig.reuse": "member",
   "checklist.run": "member",
   "reading.write": "member",
 } as const satisfies Record<string, Role>;
@@ -46,6 +47,7 @@ export const ACTION_WORDS: Record<Action, string> = {
   "rig.submit": "submit rigs for review",
   "rig.sign": "sign rigs off or return them to their riggers",
   "checklist.template": "change the crew's on-site checklist",
+  "rig.reuse": "use a signed-off rig for another site or day",
   "checklist.run": "run the on-site checklist",
   "reading.write": "record load-cell readings",
 };

@@ -5,6 +5,7 @@ import * as kit from "./20261201000010_kit";
 import * as slipTests from "./20261201000011_slip_tests";
 import * as uniqueItemLabels from "./20261201000012_unique_item_labels";
 import * as sitesAndRigs from "./20261201000020_sites_and_rigs";
+import * as crewMinimumClearance from "./20261202000030_crew_minimum_clearance";
 import * as reviewAndSignOff from "./20261202000040_review_and_sign_off";
 
 // Every migration, in order, imported statically so that the same list loads under tsx, Vitest
@@ -16,6 +17,7 @@ const migrations: Record<string, Knex.Migration> = {
   "20261201000011_slip_tests.ts": slipTests,
   "20261201000012_unique_item_labels.ts": uniqueItemLabels,
   "20261201000020_sites_and_rigs.ts": sitesAndRigs,
+  "20261202000030_crew_minimum_clearance.ts": crewMinimumClearance,
   "20261202000040_review_and_sign_off.ts": reviewAndSignOff,
 };
 

@@ -9,7 +9,10 @@ export interface SlipResult {
 }
 
 export interface BrakeCheck {
-  verdict: "holds" | "slips" | "untested";
+  /** "holds_below_margin": it holds, but with a margin below the crew's minimum. */
+  verdict: "holds" | "holds_below_margin" | "slips" | "untested";
+  /** The crew's minimum margin it is held to. */
+  minimumMargin: number;
   /** Force on the rope at the brake at peak line tension, N. */
   brakeForce: number;
   /** Lowest measured slip load for this device and diameter, N, or the highest held-to load when none slipped. */
@@ -30,29 +33,40 @@ const sameDiameter = (a: number, b: number) => Math.round(a * 10) === Math.round
 
 /**
  * Compares the force at the brake (line tension over the ideal advantage between brake and line) with the
- * bench's lowest slip load for that device on that rope diameter. A held-to result is never taken as a slip load.
+ * bench's lowest slip load for that device on that rope diameter, and the margin with the crew's minimum.
+ * A held-to result is never taken as a slip load.
  */
-export function checkBrake(device: string, ropeDiameterMm: number, bench: readonly SlipResult[], peakLineTension: number, brakeAdvantage: number): BrakeCheck {
+export function checkBrake(
+  device: string,
+  ropeDiameterMm: number,
+  bench: readonly SlipResult[],
+  peakLineTension: number,
+  brakeAdvantage: number,
+  minimumMargin: number,
+): BrakeCheck {
   const brakeForce = peakLineTension / brakeAdvantage;
   const results = bench.filter((r) => sameDevice(r.device, device) && sameDiameter(r.ropeDiameterMm, ropeDiameterMm));
   const slipped = results.filter((r) => r.result === "slipped").map((r) => r.forceN);
   const held = results.filter((r) => r.result === "held").map((r) => r.forceN);
   const load = (f: number) => `${roundUp(f / 1000)} kN`;
   const capacity = (f: number) => `${cutDown(f / 1000)} kN`;
-  const base = { brakeForce, resultsUsed: results.length };
+  const base = { brakeForce, resultsUsed: results.length, minimumMargin };
+  const belowMargin = (margin: number) => margin < minimumMargin;
+  const belowMinimum = `below the crew's minimum of ${minimumMargin}`;
   if (slipped.length > 0) {
     const slipLoad = Math.min(...slipped);
     const margin = slipLoad / brakeForce;
     const holds = brakeForce < slipLoad;
+    const thin = holds && belowMargin(margin);
     return {
       ...base,
-      verdict: holds ? "holds" : "slips",
+      verdict: !holds ? "slips" : thin ? "holds_below_margin" : "holds",
       governingLoad: slipLoad,
       lowerBoundOnly: false,
       margin,
       highestLineTensionHeld: slipLoad * brakeAdvantage,
       message: holds
-        ? `${device} on ${ropeDiameterMm} mm holds: ${load(brakeForce)} at the brake against a lowest measured slip of ${capacity(slipLoad)} (margin ${cutDown(margin)}).`
+        ? `${device} on ${ropeDiameterMm} mm holds: ${load(brakeForce)} at the brake against a lowest measured slip of ${capacity(slipLoad)} (margin ${cutDown(margin)}${thin ? `, ${belowMinimum}` : ""}).`
         : `${device} on ${ropeDiameterMm} mm slips: ${load(brakeForce)} at the brake reaches its lowest measured slip of ${capacity(slipLoad)}.`,
     };
   }
@@ -60,14 +74,16 @@ export function checkBrake(device: string, ropeDiameterMm: number, bench: readon
     const heldTo = Math.max(...held);
     if (brakeForce <= heldTo) {
       const margin = heldTo / brakeForce;
+      // A margin known only as "at least" counts as what is known of it.
+      const thin = belowMargin(margin);
       return {
         ...base,
-        verdict: "holds",
+        verdict: thin ? "holds_below_margin" : "holds",
         governingLoad: heldTo,
         lowerBoundOnly: true,
         margin,
         highestLineTensionHeld: heldTo * brakeAdvantage,
-        message: `${device} on ${ropeDiameterMm} mm held to ${capacity(heldTo)} on the bench without slipping; ${load(brakeForce)} at the brake is within that (margin at least ${cutDown(margin)}; the slip load itself was never measured).`,
+        message: `${device} on ${ropeDiameterMm} mm held to ${capacity(heldTo)} on the bench without slipping; ${load(brakeForce)} at the brake is within that (margin at least ${cutDown(margin)}${thin ? `, ${belowMinimum}` : ""}; the slip load itself was never measured).`,
       };
     }
     return {

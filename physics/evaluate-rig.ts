@@ -1,10 +1,12 @@
-import { roundUp } from "./display";
+import { cutDown, roundUp } from "./display";
 import { anchorLoads, type AnchorLoads } from "./bridle";
+import { backupCatchMissing, backupFreeFall, backupLine } from "./backup-catch";
 import { checkBrake, type BrakeCheck } from "./brake-check";
 import { CAUTIONS } from "./cautions";
-import { leashFallPeak } from "./leash-fall";
-import { lineForceDeflection } from "./line-force-deflection";
-import type { Line } from "./line-equations";
+import { lowestClearance, RULE_OF_THUMB, type LowestClearance } from "./clearance";
+import { checkGround, groundHeightAt, type GroundPoint } from "./ground";
+import { catchOnLine, type CatchHint, type LineCatch } from "./line-catch";
+import type { Line, LineVariables } from "./line-equations";
 import { lineProfile, sagAt } from "./line-profile";
 import { parseRigInput } from "./parse-rig-input";
 import { analysePulleySystem, type PulleyAnalysis } from "./pulley-system";
@@ -12,9 +14,9 @@ import { RigInputError } from "./rig-input-error";
 import type { RigInput } from "./rig-schema";
 import { safetyFactors, type LoadedComponent, type SafetyFactor } from "./safety-factors";
 import { solveLine, type LineSolution } from "./solve-line";
-import { createStretchCurve } from "./stretch-curve";
 import { sweepWalker, type Sweep } from "./sweep";
 import { lengthForPretension } from "./unstretched-length";
+import { rigLine } from "./rig-line";
 import { STANDARD_GRAVITY } from "./units";
 import { ENGINE_VERSION } from "./version";
 
@@ -35,6 +37,48 @@ export interface AnchorResult extends AnchorLoads {
   peakTensionN: number;
 }
 
+/** A fall caught by a line: the leash fall on the mainline, or the backup's catch. An upper bound (no damping). */
+export interface CatchResult {
+  upperBound: true;
+  note: string;
+  positionM: number;
+  fallHeightM: number;
+  peakLoadN: number;
+  deflectionM: number;
+  peakTensionAN: number;
+  peakTensionBN: number;
+  peakAnchorLoadN: number;
+  energyInJ: number;
+  energyStoredJ: number;
+  /** The walker's lowest point, height relative to A (m); null without a leash length. */
+  lowestPointM: number | null;
+  /** Lowest point above the ground there (m); null without ground or leash length. */
+  groundClearanceM: number | null;
+}
+
+export interface WorstClearance extends LowestClearance {
+  /** At least the crew's minimum clearance. */
+  passes: boolean;
+}
+
+export interface ClearanceResult {
+  groundGiven: boolean;
+  /** What the clearance figures rest on, or why there are none. */
+  note: string;
+  /** The crew's minimum between the walker's lowest point and the ground, m. */
+  minimumM: number;
+  /** The lowest clearance over fall positions along the span, and where; null without ground (or leash length, or backup curve). */
+  leashFall: WorstClearance | null;
+  backupCatch: WorstClearance | null;
+  /** The trade's rule of thumb, shown beside the computed figures. */
+  ruleOfThumb: {
+    source: string;
+    heightAboveGroundM: number;
+    /** The unloaded line's height above the ground at mid-span, m; null without ground. */
+    midSpanHeightAboveGroundM: number | null;
+  };
+}
+
 /** Everything evaluateRig returns; plain JSON (no functions, no Infinity, null where a value does not apply). */
 export interface RigResult {
   engineVersion: string;
@@ -43,19 +87,15 @@ export interface RigResult {
   unloaded: LineState;
   walker: LineState & { positionM: number; loadN: number; sagAtWalkerM: number };
   sweep: Sweep;
-  leashFall: {
-    upperBound: true;
-    note: string;
-    positionM: number;
-    fallHeightM: number;
-    peakLoadN: number;
-    deflectionM: number;
-    peakTensionAN: number;
-    peakTensionBN: number;
-    peakAnchorLoadN: number;
-    energyInJ: number;
-    energyStoredJ: number;
+  leashFall: CatchResult & {
+    /** How far the walker's lowest point hangs below the harness tie-in. */
+    hangBelowTieInM: number;
   };
+  /** The mainline fails with the walker standing at the fall position and the backup catches alone; null without a backup stretch curve. */
+  backupCatch: (CatchResult & { unstretchedLengthM: number; extrapolated: boolean }) | null;
+  /** Why there is no backup catch, or null when there is one. */
+  backupCatchMissing: string | null;
+  clearance: ClearanceResult;
   tensioning: PulleyAnalysis & { brakeForceAtPretensionN: number };
   brake: BrakeCheck & { peakLineTensionN: number };
   anchors: { a: AnchorResult; b: AnchorResult };
@@ -125,6 +165,41 @@ function fallPosition(rig: RigInput, walkerX: number): number {
   );
 }
 
+/** Starting points by position: the one solved nearest to x. */
+function nearestHints<T>() {
+  const known: { x: number; hint: T }[] = [];
+  return {
+    add: (x: number, hint: T) => void known.push({ x, hint }),
+    nearest: (x: number) => known.reduce<{ x: number; hint: T } | undefined>((a, b) => (a && Math.abs(a.x - x) <= Math.abs(b.x - x) ? a : b), undefined)?.hint,
+  };
+}
+
+/** The unloaded line's height above the ground at mid-span: what the rule of thumb speaks of. */
+function midSpanHeightAboveGround(line: Line, unloaded: LineVariables, ground: readonly GroundPoint[]): number {
+  const x = line.span / 2;
+  return line.rise / 2 - sagAt(line, unloaded, x) - groundHeightAt(ground, x);
+}
+
+const LEASH_FALL_NOTE = "No damping and no give in leash or harness: an upper bound on the peak loads, not a prediction.";
+
+function catchResult(c: LineCatch, lowestPointM: number | null, groundClearanceM: number | null): CatchResult {
+  return {
+    upperBound: true,
+    note: LEASH_FALL_NOTE,
+    positionM: c.x,
+    fallHeightM: c.fallHeight,
+    peakLoadN: c.peakLoad,
+    deflectionM: c.deflection,
+    peakTensionAN: c.caught.tensionA,
+    peakTensionBN: c.caught.tensionB,
+    peakAnchorLoadN: c.caught.maxTension,
+    energyInJ: c.energyIn,
+    energyStoredJ: c.energyStored,
+    lowestPointM,
+    groundClearanceM,
+  };
+}
+
 /** Evaluates a rig: tensions, sag, sweep, leash fall, pulley system, brake, anchors and safety factors. */
 export function evaluateRig(input: unknown): RigResult {
   const rig = parseRigInput(input);
@@ -136,13 +211,7 @@ export function evaluateRig(input: unknown): RigResult {
   if (rig.pretension.forceN >= mbs) {
     throw new RigInputError("pretension.forceN", rig.pretension.forceN, `a pretension > 0 N and below the mainline's MBS, ${mbs} N`);
   }
-  const backupMass = rig.backup?.ridesAlong ? rig.backup.massPerMetreKg : 0;
-  const line: Line = {
-    span: rig.spanM,
-    rise: rig.heightDifferenceM,
-    weight: (rig.mainline.massPerMetreKg + backupMass) * STANDARD_GRAVITY,
-    curve: createStretchCurve(rig.mainline.stretchPoints, "mainline.stretchPoints"),
-  };
+  const line = rigLine(rig);
   const walkerX = walkerPosition(rig);
   const walkerLoad = rig.walker.massKg * STANDARD_GRAVITY;
   const fall = fallHeight(rig);
@@ -153,13 +222,36 @@ export function evaluateRig(input: unknown): RigResult {
   const walker = solveLine(line, length, { force: walkerLoad, x: walkerX }, mbs);
   const sweep = sweepWalker(line, length, walkerLoad, mbs);
 
-  const forceDeflection = lineForceDeflection(line, length, fallX, mbs);
-  const fallPeak = leashFallPeak(rig.walker.massKg, fall, forceDeflection.load, forceDeflection.kinkBetween);
-  const caught = solveLine(line, length, { force: fallPeak.peakLoad, x: fallX }, mbs);
+  const ground = rig.ground ? checkGround(rig.ground.points, rig.spanM) : null;
+  const leash = rig.leashFall.leashLengthM;
+  const hang = rig.leashFall.hangBelowTieInM;
+  // The walker's lowest point hangs the leash and the body below the line where it stopped.
+  const lowestPoint = (c: LineCatch) => (leash === undefined ? null : c.unloadedY - c.deflection - leash - hang);
+  const clearanceOf = (c: LineCatch) => {
+    const lowest = lowestPoint(c);
+    return lowest === null || ground === null ? null : lowest - groundHeightAt(ground, c.x);
+  };
+  const mass = rig.walker.massKg;
+  const leashFallAt = (x: number, hint?: CatchHint) => catchOnLine(line, length, x, mbs, mass, () => fall, hint);
+  const leashCatch = leashFallAt(fallX);
 
-  const peakA = Math.max(sweep.worstTensionA.tensionA, caught.tensionA, unloaded.tensionA);
-  const peakB = Math.max(sweep.worstTensionB.tensionB, caught.tensionB, unloaded.tensionB);
+  const backup = backupLine(rig, length);
+  const backupAt = backup
+    ? (x: number, hint?: { main?: LineVariables; catch?: CatchHint }) => {
+        const mainlineY = solveLine(line, length, { force: walkerLoad, x }, mbs, hint?.main);
+        const fallOntoBackup = (backupY: number) => backupFreeFall(fall, mainlineY.loadY, backupY, backup.slack);
+        const c = catchOnLine(backup.line, backup.length, x, backup.mbs, mass, fallOntoBackup, hint?.catch);
+        return { catch: c, main: mainlineY.variables };
+      }
+    : null;
+  const backupCatch = backupAt ? backupAt(fallX).catch : null;
+
+  const peakA = Math.max(sweep.worstTensionA.tensionA, leashCatch.caught.tensionA, unloaded.tensionA);
+  const peakB = Math.max(sweep.worstTensionB.tensionB, leashCatch.caught.tensionB, unloaded.tensionB);
   const peakLine = Math.max(peakA, peakB);
+  // The anchors carry the backup too when it catches.
+  const anchorPeakA = Math.max(peakA, backupCatch?.caught.tensionA ?? 0);
+  const anchorPeakB = Math.max(peakB, backupCatch?.caught.tensionB ?? 0);
 
   const tensioning = analysePulleySystem(
     { stages: rig.tensioning.stages.map((s) => s.ratio), sheaveEfficiency: rig.tensioning.sheaveEfficiency, brake: rig.tensioning.brake },
@@ -167,14 +259,17 @@ export function evaluateRig(input: unknown): RigResult {
     rig.tensioning.pullPerPersonN,
   );
   const peakAtTensioner = rig.pretension.readAt === "a" ? peakA : peakB;
-  const brake = checkBrake(rig.brake.device, rig.brake.ropeDiameterMm, rig.slipBench, peakAtTensioner, tensioning.brakeAdvantage);
+  const brake = checkBrake(rig.brake.device, rig.brake.ropeDiameterMm, rig.slipBench, peakAtTensioner, tensioning.brakeAdvantage, rig.minimumBrakeMargin);
 
   const anchors = {
-    a: { ...anchorLoads(rig.anchors.a.layout, peakA, "anchors.a.layout"), peakTensionN: peakA },
-    b: { ...anchorLoads(rig.anchors.b.layout, peakB, "anchors.b.layout"), peakTensionN: peakB },
+    a: { ...anchorLoads(rig.anchors.a.layout, anchorPeakA, "anchors.a.layout"), peakTensionN: anchorPeakA },
+    b: { ...anchorLoads(rig.anchors.b.layout, anchorPeakB, "anchors.b.layout"), peakTensionN: anchorPeakB },
   };
   const components: LoadedComponent[] = [
     { name: rig.mainline.name, category: "webbing", location: "line", mbs, peakLoad: peakLine },
+    ...(backup && backupCatch
+      ? [{ name: backup.name, category: "webbing" as const, location: "backup" as const, mbs: backup.mbs, peakLoad: backupCatch.caught.maxTension }]
+      : []),
     ...(["a", "b"] as const).flatMap((side) =>
       rig.anchors[side].components.map((c) => ({
         name: c.name,
@@ -195,10 +290,73 @@ export function evaluateRig(input: unknown): RigResult {
   }
   for (const f of factors.filter((f) => !f.passes)) {
     warnings.push(
-      `${f.name} (${f.location === "line" ? "line" : `anchor ${f.location}`}): safety factor ${f.shown} is below the crew minimum of ${f.minimum}.`,
+      `${f.name} (${f.location === "line" ? "line" : f.location === "backup" ? "backup, catching a fall" : `anchor ${f.location}`}): safety factor ${f.shown} is below the crew minimum of ${f.minimum}.`,
     );
   }
   if (brake.verdict !== "holds") warnings.push(brake.message);
+  if (backupCatch?.caught.extrapolated) {
+    warnings.push(
+      `The backup's peak tension at the catch, ${roundUp(backupCatch.caught.maxTension / 1000)} kN, is beyond its stretch curve's last measured point (${(backup!.line.curve.lastMeasuredTension / 1000).toFixed(2)} kN): the curve is extrapolated with its last stiffness.`,
+    );
+  }
+
+  const leashHints = nearestHints<CatchHint>();
+  leashHints.add(fallX, leashCatch.hint);
+  const backupHints = nearestHints<{ main: LineVariables; catch: CatchHint }>();
+  const canClear = ground !== null && leash !== undefined;
+  const worst = (lowestPointAt: (x: number) => number): WorstClearance => {
+    const lowest = lowestClearance(
+      rig.spanM,
+      rig.heightDifferenceM,
+      leash! + hang,
+      (x) => groundHeightAt(ground!, x),
+      ground!.map((p) => p.xM),
+      lowestPointAt,
+    );
+    return { ...lowest, passes: lowest.clearanceM >= rig.minimumClearanceM };
+  };
+  const clearance: ClearanceResult = {
+    groundGiven: ground !== null,
+    note:
+      ground === null
+        ? "No ground was given: the walker's lowest points are heights relative to anchor A, and there are no clearances."
+        : leash === undefined
+          ? "No leash length was given (only a free-fall height): the walker's lowest point and the clearances need it."
+          : "Clearance: the walker's lowest point (the line's unloaded height there, less the catch deflection, the leash and the body below the tie-in) above the ground; the lowest over fall positions from 1 % to 99 % of the span.",
+    minimumM: rig.minimumClearanceM,
+    leashFall: canClear
+      ? worst((x) => {
+          const c = leashFallAt(x, leashHints.nearest(x));
+          leashHints.add(x, c.hint);
+          return lowestPoint(c)!;
+        })
+      : null,
+    backupCatch:
+      canClear && backupAt
+        ? worst((x) => {
+            const c = backupAt(x, backupHints.nearest(x));
+            backupHints.add(x, { main: c.main, catch: c.catch.hint });
+            return lowestPoint(c.catch)!;
+          })
+        : null,
+    ruleOfThumb: {
+      source: RULE_OF_THUMB.source,
+      heightAboveGroundM: RULE_OF_THUMB.heightAboveGroundM(rig.spanM),
+      midSpanHeightAboveGroundM: ground ? midSpanHeightAboveGround(line, unloaded.variables, ground) : null,
+    },
+  };
+  for (const [what, worst] of [
+    ["A leash fall", clearance.leashFall],
+    ["A fall caught by the backup", clearance.backupCatch],
+  ] as const) {
+    if (worst && !worst.passes) {
+      const gap =
+        worst.clearanceM >= 0
+          ? `leaves ${cutDown(worst.clearanceM)} m between the walker's lowest point and the ground`
+          : `reaches the ground: the walker's lowest point would be ${roundUp(-worst.clearanceM)} m below it`;
+      warnings.push(`${what} at ${worst.positionM.toFixed(1)} m from A ${gap}; the crew's minimum clearance is ${clearance.minimumM} m.`);
+    }
+  }
   for (const side of ["a", "b"] as const) {
     const layout = rig.anchors[side].layout;
     if (layout.kind === "bridle" && layout.includedAngleDeg > 120) {
@@ -213,24 +371,23 @@ export function evaluateRig(input: unknown): RigResult {
     unloaded: lineState(line, unloaded),
     walker: { ...lineState(line, walker), positionM: walkerX, loadN: walkerLoad, sagAtWalkerM: walker.loadSag },
     sweep,
-    leashFall: {
-      upperBound: true,
-      note: "No damping and no give in leash or harness: an upper bound on the peak loads, not a prediction.",
-      positionM: fallX,
-      fallHeightM: fall,
-      peakLoadN: fallPeak.peakLoad,
-      deflectionM: fallPeak.deflection,
-      peakTensionAN: caught.tensionA,
-      peakTensionBN: caught.tensionB,
-      peakAnchorLoadN: caught.maxTension,
-      energyInJ: fallPeak.energyIn,
-      energyStoredJ: fallPeak.energyStored,
-    },
+    leashFall: { ...catchResult(leashCatch, lowestPoint(leashCatch), clearanceOf(leashCatch)), hangBelowTieInM: hang },
+    backupCatch:
+      backup && backupCatch
+        ? {
+            ...catchResult(backupCatch, lowestPoint(backupCatch), clearanceOf(backupCatch)),
+            note: "The mainline fails with the walker standing here and the backup catches alone: no damping, no give in leash or harness, an upper bound.",
+            unstretchedLengthM: backup.length,
+            extrapolated: backupCatch.caught.extrapolated,
+          }
+        : null,
+    backupCatchMissing: backupCatchMissing(rig),
+    clearance,
     tensioning: { ...tensioning, brakeForceAtPretensionN: rig.pretension.forceN / tensioning.brakeAdvantage },
     brake: { ...brake, peakLineTensionN: peakAtTensioner },
     anchors,
     safetyFactors: factors,
-    extrapolated,
+    extrapolated: extrapolated || (backupCatch?.caught.extrapolated ?? false),
     warnings,
     cautions: CAUTIONS,
   };

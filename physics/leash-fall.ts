@@ -1,5 +1,5 @@
 import { checkNumber } from "./check-number";
-import { GAUSS_LOBATTO_5 } from "./gauss-lobatto";
+import type { LoadPathState } from "./line-force-deflection";
 import { SolveError } from "./solve-error";
 import { STANDARD_GRAVITY } from "./units";
 
@@ -13,76 +13,35 @@ export interface LeashFallPeak {
   energyStored: number;
 }
 
-/** A state on the load path: deflection u (m), load P(u) (N) and the work ∫₀^u P du done to reach it (J). */
-interface PathState {
-  u: number;
-  load: number;
-  work: number;
-}
-
 /**
- * The state at deflection u, reached from a known state by one Gauss–Lobatto panel of ∫P du: the
- * panel's ends are the known state and the new one, so each step costs three new loads.
+ * Peak of a fall with no damping (an upper bound): the walker falls freely through h_f, then the line
+ * deflects until all the energy is stored, m·g·(h_f + δ) = ∫₀^δ P(u) du (energy balance, e.g. Meriam &
+ * Kraige, Engineering Mechanics: Dynamics, work–energy for a mass dropped on a spring). `stateAt(u)` gives
+ * P(u) and the work ∫₀^u P du. `guess` (e.g. the deflection at a neighbouring position) only saves steps.
  */
-function stepTo(from: PathState, u: number, loadAtDeflection: (u: number) => number): PathState {
-  const { nodes, weights } = GAUSS_LOBATTO_5;
-  const h = u - from.u;
-  let sum = weights[0] * from.load;
-  for (let i = 1; i < nodes.length - 1; i++) sum += weights[i] * loadAtDeflection(from.u + h * nodes[i]);
-  const load = loadAtDeflection(u);
-  sum += weights[nodes.length - 1] * load;
-  return { u, load, work: from.work + h * sum };
-}
-
-/**
- * Peak of a leash fall with no damping (an upper bound): the walker falls freely through h_f, then the
- * line deflects until all the energy is stored, m·g·(h_f + δ) = ∫₀^δ P(u) du, P(u) being the static
- * load that holds the line u below its unloaded shape at the fall position (energy balance, e.g.
- * Meriam & Kraige, Engineering Mechanics: Dynamics, work–energy for a mass dropped on a spring).
- * The work is carried along the load path panel by panel, each new state stepping from the nearest
- * known one, so no load is solved twice and the last panels are short. `kinkBetween(u0, u1)` names the
- * first deflection in between where P(u) bends sharply (e.g. the stiffness changing at a measured
- * point of the stretch curve): no panel straddles one.
- */
-export function leashFallPeak(
-  mass: number,
-  fallHeight: number,
-  loadAtDeflection: (u: number) => number,
-  kinkBetween: (u0: number, u1: number) => number | undefined = () => undefined,
-): LeashFallPeak {
+export function leashFallPeak(mass: number, fallHeight: number, stateAt: (u: number) => LoadPathState, guess?: number): LeashFallPeak {
   checkNumber("leashFall.mass", mass, (v) => v > 0, "a mass > 0 kg");
   checkNumber("leashFall.fallHeight", fallHeight, (v) => v >= 0 && v <= 100, "a free-fall height from 0 m to 100 m");
   const weight = mass * STANDARD_GRAVITY;
-  const imbalance = (s: PathState) => s.work - weight * (fallHeight + s.u);
-  // Bracket the deflection by doubling (at least the first step), the work carried from one end of the bracket to the next; a
-  // panel that straddles a kink is taken again up to the kink, so the bracket holds none.
-  const panel = (from: PathState, u: number) => {
-    const to = stepTo(from, u, loadAtDeflection);
-    const kink = kinkBetween(from.u, u);
-    return kink === undefined || !(kink > from.u && kink < u) ? to : stepTo(from, kink, loadAtDeflection);
-  };
-  const firstStep = Math.max(fallHeight, 0.05);
-  let lo: PathState = { u: 0, load: loadAtDeflection(0), work: 0 };
-  let hi = panel(lo, firstStep);
-  for (let i = 0; imbalance(hi) <= 0; i++) {
-    if (i > 80) throw new SolveError("leash fall: bracketing the deflection", i, Math.abs(imbalance(hi)));
-    lo = hi;
-    hi = panel(hi, hi.u + Math.max(hi.u, firstStep));
-  }
-  // Safeguarded Newton from the high end: d(imbalance)/dδ = P(δ) − m·g, and the imbalance is convex
-  // (P grows with u), so the steps close in from above.
-  let current = hi;
-  for (let iteration = 0; iteration < 100; iteration++) {
+  const imbalance = (s: LoadPathState) => s.work - weight * (fallHeight + s.u);
+  // d(imbalance)/dδ = P(δ) − m·g and the imbalance is convex (P grows with u): Newton from above closes in
+  // monotonically; from below, the trial at most doubles.
+  let lo: LoadPathState = { u: 0, load: 0, work: 0 };
+  let hi: LoadPathState | undefined;
+  let current = stateAt(guess !== undefined && guess > 0 ? guess : Math.max(fallHeight, 0.05));
+  for (let iteration = 0; iteration < 200; iteration++) {
     const r = imbalance(current);
-    if (Math.abs(r) <= 1e-12 * weight * (fallHeight + current.u) || hi.u - lo.u <= 1e-12 * hi.u) {
+    if (r > 0) hi = current;
+    else lo = current;
+    if (hi && (Math.abs(r) <= 1e-9 * weight * (fallHeight + current.u) || hi.u - lo.u <= 1e-10 * hi.u)) {
       return { peakLoad: current.load, deflection: current.u, energyIn: weight * (fallHeight + current.u), energyStored: current.work };
     }
     const slope = current.load - weight;
-    let next = slope > 0 ? current.u - r / slope : (lo.u + hi.u) / 2;
-    if (!(next > lo.u && next < hi.u)) next = (lo.u + hi.u) / 2;
-    current = stepTo(next - lo.u < hi.u - next ? lo : hi, next, loadAtDeflection);
-    if (imbalance(current) > 0) hi = current;
-    else lo = current;
+    let next = slope > 0 ? current.u - r / slope : 2 * current.u;
+    if (hi && !(next > lo.u && next < hi.u)) next = (lo.u + hi.u) / 2;
+    // Below the root a Newton step where P barely exceeds m·g would shoot far past it: at most double.
+    if (!hi && !(next > lo.u && next <= 2 * current.u)) next = 2 * current.u;
+    current = stateAt(next);
   }
-  throw new SolveError("leash fall energy balance", 100, Math.abs(imbalance(current)) / (weight * (fallHeight + current.u)));
+  throw new SolveError("leash fall energy balance", 200, Math.abs(imbalance(current)) / (weight * (fallHeight + current.u)));
 }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { DEFAULT_MINIMUM_CLEARANCE_M } from "./clearance";
 import { COMPONENT_CATEGORIES, DEFAULT_MINIMUM_FACTORS } from "./safety-factors";
 import { MAX_SPAN } from "./solve-line";
 
@@ -15,6 +16,18 @@ const stretchPoint = z.object({
   tensionKN: number("a tension ≥ 0 kN").gte(0, "a tension ≥ 0 kN"),
   elongationPct: number("an elongation ≥ 0 %").gte(0, "an elongation ≥ 0 %"),
 });
+
+/** Longest lists the engine takes: a ground profile sketched from measured heights, a stretch test's points. */
+export const MAX_GROUND_POINTS = 200;
+export const MAX_STRETCH_POINTS = 50;
+
+const stretchPoints = z
+  .array(stretchPoint, { error: "a list of { tensionKN, elongationPct } points" })
+  .min(2, "at least two points, the first at 0 kN and 0 %")
+  .max(MAX_STRETCH_POINTS, `at most ${MAX_STRETCH_POINTS} points`);
+
+/** How far the walker's lowest point (the feet) hangs below the harness tie-in when caught: 1.2 m for an adult (a value from memory). */
+export const DEFAULT_HANG_BELOW_TIE_IN_M = 1.2;
 
 const component = z.object({
   name: name("a component name"),
@@ -51,15 +64,39 @@ export const RigInputSchema = z.object({
     name: name("a webbing name"),
     massPerMetreKg: positive("a mass per metre > 0 kg/m"),
     mbsN: positive("a minimum breaking strength > 0 N"),
-    stretchPoints: z.array(stretchPoint, { error: "a list of { tensionKN, elongationPct } points" }).min(2, "at least two points, the first at 0 kN and 0 %"),
+    stretchPoints,
   }),
-  /** A backup that rides along adds its weight; it carries no tension until the mainline fails. */
+  /**
+   * A backup that rides along adds its weight; it carries no tension until the mainline fails. With its
+   * stretch points and slack (its unstretched length is the mainline's plus the slack) the engine works out
+   * how it catches a fall when the mainline fails.
+   */
   backup: z
     .object({
       name: name("a webbing name"),
       massPerMetreKg: positive("a mass per metre > 0 kg/m"),
       mbsN: positive("a minimum breaking strength > 0 N"),
       ridesAlong: z.boolean({ error: "true or false" }),
+      stretchPoints: stretchPoints.optional(),
+      slackM: number("a slack from 0 m to 100 m (the backup's length over the mainline's)")
+        .gte(0, "a slack from 0 m to 100 m (the backup's length over the mainline's)")
+        .lte(100, "a slack from 0 m to 100 m (the backup's length over the mainline's)")
+        .optional(),
+    })
+    .optional(),
+  /** The ground under the line: distance from A and height relative to A (negative below), linear between points, level beyond the ends. */
+  ground: z
+    .object({
+      points: z
+        .array(
+          z.object({
+            xM: number("a distance from anchor A ≥ 0 m, within the span").gte(0, "a distance from anchor A ≥ 0 m, within the span"),
+            heightM: number("a height relative to anchor A in m (negative below A)"),
+          }),
+          { error: "a list of { xM, heightM } points" },
+        )
+        .min(1, "at least one point")
+        .max(MAX_GROUND_POINTS, `at most ${MAX_GROUND_POINTS} points`),
     })
     .optional(),
   /** Pretension read at one anchor with nobody on the line. */
@@ -84,6 +121,11 @@ export const RigInputSchema = z.object({
       .gte(0, "a free-fall height from 0 m to 100 m")
       .lte(100, "a free-fall height from 0 m to 100 m")
       .optional(),
+    /** How far the walker's lowest point hangs below the harness tie-in when caught. */
+    hangBelowTieInM: number("a height from 0 m to 5 m")
+      .gte(0, "a height from 0 m to 5 m")
+      .lte(5, "a height from 0 m to 5 m")
+      .default(DEFAULT_HANG_BELOW_TIE_IN_M),
     /** Fall position as a fraction of the span from A; default the walker's position. */
     positionFraction: number("a fraction of the span from 0 to 1")
       .gte(0, "a fraction of the span from 0 to 1")
@@ -129,6 +171,13 @@ export const RigInputSchema = z.object({
       }),
     )
     .default([]),
+  /** The crew's minimum brake margin (lowest slip ÷ force at the brake); default common practice, no source. */
+  minimumBrakeMargin: positive("a minimum brake margin > 0").default(DEFAULT_MINIMUM_FACTORS.other),
+  /** The crew's minimum clearance between the walker's lowest point and the ground after a fall, m. */
+  minimumClearanceM: number("a minimum clearance from 0 m to 100 m")
+    .gte(0, "a minimum clearance from 0 m to 100 m")
+    .lte(100, "a minimum clearance from 0 m to 100 m")
+    .default(DEFAULT_MINIMUM_CLEARANCE_M),
   /** The crew's minimum safety factors; defaults are common practice, no source. */
   minimumSafetyFactors: z
     .object({ webbing: minimum("webbing"), connector: minimum("connector"), sling: minimum("sling"), anchor: minimum("anchor"), other: minimum("other") })

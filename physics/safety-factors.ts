@@ -10,8 +10,8 @@ export const DEFAULT_MINIMUM_FACTORS: Record<ComponentCategory, number> = { webb
 export interface LoadedComponent {
   name: string;
   category: ComponentCategory;
-  /** Where it sits: anchor "a", "b", or the line itself. */
-  location: "a" | "b" | "line";
+  /** Where it sits: anchor "a", "b", the line itself, or the backup (loaded when it catches a fall). */
+  location: "a" | "b" | "line" | "backup";
   /** Minimum breaking strength, N. */
   mbs: number;
   /** Peak load the component sees, N. */

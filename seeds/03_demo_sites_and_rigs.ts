@@ -72,7 +72,7 @@ interface DemoRig {
 }
 
 export async function seed(knex: Knex): Promise<void> {
-  const crew = await knex("crews").where({ name: DEMO_CREW_NAME }).first("id", "min_safety_factors");
+  const crew = await knex("crews").where({ name: DEMO_CREW_NAME }).first("id", "min_safety_factors", "min_clearance_m");
   if (!crew) return;
   const people = Object.fromEntries((await knex("users").select("id", "email")).map((u: { id: string; email: string }) => [u.email, u.id]));
   const models = await knex("gear_models").where({ crew_id: crew.id }).select("id", "kind", "name", "specs", knex.raw('retired_on::text as "retiredOn"'));
@@ -87,7 +87,7 @@ export async function seed(knex: Knex): Promise<void> {
       knex.raw('force_n as "forceN"'),
     );
   const catalogue: KitCatalogue = { models, bench: tests };
-  const example = startingRig(crew.min_safety_factors);
+  const example = startingRig(crew.min_safety_factors, crew.min_clearance_m);
 
   const kitGear = {
     mainline: { modelId: modelId("tubular") },

@@ -1,5 +1,6 @@
 "use client";
 
+import { when } from "@/lib/when";
 import { useRouter } from "next/navigation";
 import { Table } from "@/components/ui/table";
 import { Button } from "@/components/ui/button";
@@ -14,8 +15,6 @@ export interface SessionItem {
   device: string;
   current: boolean;
 }
-
-const when = (iso: string) => new Date(iso).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" });
 
 export function SessionsList({ sessions }: { sessions: SessionItem[] }) {
   const router = useRouter();

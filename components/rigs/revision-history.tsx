@@ -1,5 +1,6 @@
 "use client";
 
+import { when } from "@/lib/when";
 import { useState } from "react";
 import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
@@ -15,8 +16,6 @@ import type { RevisionBody } from "@/lib/planner/saved-revision";
 export function modelNamer(catalogue: KitCatalogue, snapshots: readonly RevisionSnapshot[]) {
   return (id: string) => catalogue.models.find((m) => m.id === id)?.name ?? snapshots.flatMap((s) => s.gear).find((g) => g.modelId === id)?.name;
 }
-
-const when = (iso: string) => new Date(iso).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" });
 
 function useRevision(rigId: string, id: string | undefined) {
   return useQuery({
@@ -37,20 +36,25 @@ function Comparison({ rigId, fromId, toId, units, catalogue }: { rigId: string; 
       </p>
     );
   if (!from.data || !to.data) return <p className="text-ink-600">Loading both revisions…</p>;
-  const differences = inputDifferences(plannerValues(from.data), plannerValues(to.data), units, modelNamer(catalogue, [from.data.snapshot, to.data.snapshot]));
+  return <RevisionDifferences from={from.data} to={to.data} units={units} catalogue={catalogue} />;
+}
+
+/** The inputs that differ between two revisions, the site and the bench's slip tests among them, in the crew's units. */
+export function RevisionDifferences({ from, to, units, catalogue }: { from: RevisionBody; to: RevisionBody; units: UnitSystem; catalogue: KitCatalogue }) {
+  const differences = inputDifferences(plannerValues(from), plannerValues(to), units, modelNamer(catalogue, [from.snapshot, to.snapshot]));
   const site = (s: RevisionSnapshot) => s.site?.name ?? "no site (free span)";
-  const siteChanged = from.data.snapshot.site?.id !== to.data.snapshot.site?.id;
-  const benchChanged = from.data.snapshot.slipTestIds.length !== to.data.snapshot.slipTestIds.length;
+  const siteChanged = from.snapshot.site?.id !== to.snapshot.site?.id;
+  const benchChanged = from.snapshot.slipTestIds.length !== to.snapshot.slipTestIds.length;
   if (!differences.length && !benchChanged)
     return (
       <p>
-        Revisions {from.data.number} and {to.data.number} have the same inputs.
+        Revisions {from.number} and {to.number} have the same inputs.
       </p>
     );
   return (
     <table className="w-full text-left text-sm">
       <caption className="pb-1 text-left font-semibold">
-        What changed from revision {from.data.number} to revision {to.data.number}
+        What changed from revision {from.number} to revision {to.number}
       </caption>
       <thead>
         <tr className="border-b border-ink-200">
@@ -58,10 +62,10 @@ function Comparison({ rigId, fromId, toId, units, catalogue }: { rigId: string; 
             Input
           </th>
           <th scope="col" className="py-1 pr-2">
-            Revision {from.data.number}
+            Revision {from.number}
           </th>
           <th scope="col" className="py-1">
-            Revision {to.data.number}
+            Revision {to.number}
           </th>
         </tr>
       </thead>
@@ -71,8 +75,8 @@ function Comparison({ rigId, fromId, toId, units, catalogue }: { rigId: string; 
             <th scope="row" className="py-1 pr-2 font-medium">
               Site
             </th>
-            <td className="py-1 pr-2">{site(from.data.snapshot)}</td>
-            <td className="py-1">{site(to.data.snapshot)}</td>
+            <td className="py-1 pr-2">{site(from.snapshot)}</td>
+            <td className="py-1">{site(to.snapshot)}</td>
           </tr>
         ) : null}
         {differences.map((d) => (
@@ -89,8 +93,8 @@ function Comparison({ rigId, fromId, toId, units, catalogue }: { rigId: string; 
             <th scope="row" className="py-1 pr-2 font-medium">
               Slip tests of the brake from the bench
             </th>
-            <td className="py-1 pr-2 tabular-nums">{from.data.snapshot.slipTestIds.length}</td>
-            <td className="py-1 tabular-nums">{to.data.snapshot.slipTestIds.length}</td>
+            <td className="py-1 pr-2 tabular-nums">{from.snapshot.slipTestIds.length}</td>
+            <td className="py-1 tabular-nums">{to.snapshot.slipTestIds.length}</td>
           </tr>
         ) : null}
       </tbody>

@@ -8,17 +8,7 @@ import { Table } from "@/components/ui/table";
 import { SweepChart } from "./sweep-chart";
 import { Verdict } from "./verdict";
 import { BRAKE_VERDICTS } from "./verdict-words";
-
-function Panel({ title, children, id }: { title: string; children: ReactNode; id?: string }) {
-  return (
-    <section aria-labelledby={id} className="space-y-3 rounded-panel border border-ink-200 bg-white p-4 shadow-panel">
-      <h2 id={id} className="text-lg">
-        {title}
-      </h2>
-      {children}
-    </section>
-  );
-}
+import { Panel } from "@/components/ui/panel";
 
 /** Label and figure pairs, large enough to read at arm's length. */
 function Figures({ rows }: { rows: [string, ReactNode][] }) {
@@ -34,7 +24,8 @@ function Figures({ rows }: { rows: [string, ReactNode][] }) {
   );
 }
 
-const where = (f: SafetyFactor) => (f.location === "line" ? "Line" : `Anchor ${f.location.toUpperCase()}`);
+const WHERE: Record<SafetyFactor["location"], string> = { line: "Line", backup: "Backup, at its catch", a: "Anchor A", b: "Anchor B" };
+const where = (f: SafetyFactor) => WHERE[f.location];
 
 function SafetyFactorTable({ factors, units }: { factors: SafetyFactor[]; units: UnitSystem }) {
   return (

@@ -218,7 +218,7 @@ function LineFields({ line }: { line: "mainline" | "backup" }) {
         <Quantity name={`${line}.massPerMetreKg`} readOnly={!!model} />
         <Quantity name={`${line}.mbsN`} readOnly={!!model} />
       </Pair>
-      {line === "mainline" ? <StretchTable line="mainline" readOnly={!!model} /> : null}
+      <StretchTable line={line} readOnly={!!model} />
     </>
   );
 }
@@ -241,6 +241,7 @@ function BackupFields() {
               mbsN: mainline.mbsN,
               ridesAlong: true,
               modelId: mainline.modelId,
+              stretchPoints: structuredClone(mainline.stretchPoints),
             };
             setValue("backup", event.target.checked ? copy : undefined, { shouldValidate: true });
           }}
@@ -250,6 +251,11 @@ function BackupFields() {
       {backup !== undefined ? (
         <>
           <LineFields line="backup" />
+          <Quantity
+            name="backup.slackM"
+            optional
+            hint="Its unstretched length over the mainline's. With its stretch points, the engine works out its catch if the mainline fails."
+          />
           <label className="flex min-h-target items-center gap-3">
             <input type="checkbox" className="h-6 w-6" {...register("backup.ridesAlong")} />
             {labelOf("backup.ridesAlong")} (adds its weight)
@@ -282,6 +288,7 @@ function PretensionAndWalker() {
           <Quantity name="leashFall.harnessHeightM" optional />
           <Quantity name="leashFall.fallHeightM" optional hint="Blank: leash length + harness height." />
           <Quantity name="leashFall.positionFraction" optional hint="Blank: at the walker." />
+          <Quantity name="leashFall.hangBelowTieInM" optional hint="Blank: 1.2 m, an adult's feet below the tie-in (a value from memory)." />
         </Pair>
       </Section>
     </>
@@ -510,12 +517,14 @@ const MINIMUM_KEYS = ["webbing", "connector", "sling", "anchor", "other"] as con
 
 function MinimumFactorFields() {
   return (
-    <Section title="Minimum safety factors" open={false}>
+    <Section title="Crew minimums" open={false}>
       <p className="text-sm text-ink-600">From your crew&apos;s settings; change them here only to see what a stricter minimum would ask.</p>
       <div className="grid gap-4 sm:grid-cols-2">
         {MINIMUM_KEYS.map((key) => (
           <Quantity key={key} name={`minimumSafetyFactors.${key}`} />
         ))}
+        <Quantity name="minimumBrakeMargin" />
+        <Quantity name="minimumClearanceM" />
       </div>
     </Section>
   );

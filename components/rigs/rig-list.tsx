@@ -1,5 +1,6 @@
 "use client";
 
+import { day } from "@/lib/when";
 import { useDeferredValue, useState } from "react";
 import Link from "next/link";
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
@@ -44,7 +45,6 @@ function queryString(filters: Filters, units: UnitSystem): string {
   return params.toString();
 }
 
-const when = (iso: string) => new Date(iso).toLocaleDateString("en-GB", { dateStyle: "medium" });
 const choice = (all: string, options: { value: string; label: string }[]) => [{ value: "", label: all }, ...options];
 
 /** The crew's rigs: searched, filtered and sorted on the server, a page at a time. */
@@ -153,7 +153,7 @@ export function RigList({
                 { key: "site", header: "Site", cell: (r) => r.siteName ?? "Free span" },
                 { key: "span", header: "Span", align: "right", cell: (r) => <span className="whitespace-nowrap">{formatDistance(r.head.spanM, units)}</span> },
                 { key: "mainline", header: "Mainline", cell: (r) => r.head.mainlineName },
-                { key: "saved", header: "Last saved", cell: (r) => `${when(r.head.createdAt)}${r.head.authorName ? `, ${r.head.authorName}` : ""}` },
+                { key: "saved", header: "Last saved", cell: (r) => `${day(r.head.createdAt)}${r.head.authorName ? `, ${r.head.authorName}` : ""}` },
               ]}
             />
           ) : (

@@ -1,5 +1,6 @@
 "use client";
 
+import { when } from "@/lib/when";
 import { useEffect, useState } from "react";
 import { useRouter } from "next/navigation";
 import type { UseFormReturn } from "react-hook-form";
@@ -23,8 +24,6 @@ export interface ServerRefusal {
   valuesJson: string;
   fieldErrors: Record<string, string>;
 }
-
-const when = (iso: string) => new Date(iso).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" });
 
 /** What is sent for a save: the rig's name and site apart, the engine's input (with the Kit's ids) as it is. */
 function saveBody(values: Values) {

@@ -36,3 +36,25 @@ export function passwordResetMail(input: { to: string; url: string }): OutgoingM
     "The link works once and for one hour. If you did not ask for it, ignore this message: your password stays as it is.",
   );
 }
+
+export function reviewRequestMail(input: {
+  to: string;
+  crewName: string;
+  riggerName: string;
+  rigName: string;
+  revisionNumber: number;
+  note: string;
+  url: string;
+}): OutgoingMail {
+  return compose(
+    input.to,
+    `Review ${input.rigName} (revision ${input.revisionNumber}) for ${input.crewName}`,
+    [
+      `${input.riggerName} has submitted revision ${input.revisionNumber} of ${input.rigName} for review in ${input.crewName}.`,
+      ...(input.note ? [`Their note: “${input.note}”`] : []),
+      "Check its inputs and figures against the site and the gear, then sign it off or return it with your comments.",
+    ],
+    { label: "Review the rig", url: input.url },
+    "You receive this as a lead or owner of the crew. Nobody should walk the line before it is signed off.",
+  );
+}

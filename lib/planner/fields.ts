@@ -33,6 +33,8 @@ const TABLE: [RegExp, (m: string[]) => string, FieldKind][] = [
   [/^name$/, () => "Rig name", "text"],
   [/^spanM$/, () => "Horizontal span A to B", "length"],
   [/^heightDifferenceM$/, () => "Height of B above A", "length"],
+  [/^ground\.points\.(\d+)\.xM$/, (m) => `Ground point ${ordinal(+m[1])} distance from A`, "length"],
+  [/^ground\.points\.(\d+)\.heightM$/, (m) => `Ground point ${ordinal(+m[1])} height`, "length"],
   [/^ground(\..*)?$/, () => "Ground under the line", "list"],
   ...line("mainline", "Mainline"),
   ...line("backup", "Backup"),
@@ -83,6 +85,8 @@ const TABLE: [RegExp, (m: string[]) => string, FieldKind][] = [
   [/^minimumSafetyFactors\.anchor$/, () => "Minimum for anchors", "plain"],
   [/^minimumSafetyFactors\.other$/, () => "Minimum for other gear (rope, pulleys, brake)", "plain"],
   [/^minimumSafetyFactors(\..*)?$/, () => "Minimum safety factors", "list"],
+  [/^minimumBrakeMargin$/, () => "Minimum brake margin (lowest slip ÷ force at the brake)", "plain"],
+  [/^minimumClearanceM$/, () => "Minimum clearance below a fall", "length"],
 ];
 
 const ENTRIES: FieldEntry[] = TABLE.map(([pattern, label, kind]) => ({ pattern, label, kind }));

@@ -10,6 +10,8 @@ export interface PlannerData {
   /** The crew's sites in use, as a rig records them. */
   sites: SiteSnapshot[];
   minimums: Awaited<ReturnType<typeof crewSettings>>["minSafetyFactors"];
+  /** The crew's minimum clearance below a fall, m. */
+  minClearanceM: number;
 }
 
 /** What every planner page reads: the crew's units and minimums, its Kit and slip bench, and its sites. */
@@ -19,6 +21,7 @@ export async function plannerData(crewId: string): Promise<PlannerData> {
     units: settings.units,
     catalogue,
     minimums: settings.minSafetyFactors,
+    minClearanceM: settings.minClearanceM,
     sites: sites.map(({ id, name, spanM, heightDifferenceM, uncertaintyM, measuredBy, ground }) => ({
       id,
       name,

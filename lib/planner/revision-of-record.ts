@@ -2,6 +2,16 @@ import type { UnitSystem } from "@/lib/rig-form/quantities";
 import { RequestError } from "@/lib/http-errors";
 import { kitCatalogue, siteSnapshot } from "./catalogue";
 import { buildRevision, type NewRevision } from "./revision-row";
+import { findSite } from "@/db/sites";
+
+/** A new rig may not be planned on an archived site. */
+export async function assertSiteOpen(crewId: string, siteId: string | null): Promise<void> {
+  if (siteId && (await findSite(crewId, siteId))?.archivedAt) {
+    throw new RequestError(400, "Site: that site is archived; bring it back on its page before planning a new rig on it.", {
+      siteId: "This site is archived.",
+    });
+  }
+}
 
 /** The server's revision for a planner's save, from the crew's Kit and site as they are now: the one of record. */
 export async function revisionOfRecord(

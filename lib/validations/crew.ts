@@ -47,6 +47,10 @@ const factor = (label: string) => {
     });
 };
 
+/** The minimum clearance's label on the settings form. */
+export const MINIMUM_CLEARANCE_LABEL = "Minimum clearance below a fall";
+const CLEARANCE_ALLOWED = `${MINIMUM_CLEARANCE_LABEL}: from 0 m to 100 m.`;
+
 export const CrewSettingsSchema = z.object({
   units: z.enum(["si", "us"], { error: "Choose SI or US units." }),
   minSafetyFactors: z.object(
@@ -55,6 +59,8 @@ export const CrewSettingsSchema = z.object({
       error: "Give a minimum safety factor for each kind of gear.",
     },
   ),
+  /** Between the walker's lowest point after a fall and the ground, m (stored in SI, shown in the crew's units). */
+  minClearanceM: z.number({ error: CLEARANCE_ALLOWED }).min(0, CLEARANCE_ALLOWED).max(100, CLEARANCE_ALLOWED),
   allowSelfSignOff: z.boolean({ error: "Choose yes or no." }),
 });
 

@@ -21,6 +21,7 @@ export interface RevisionMeta {
   engineVersion: string;
   spanM: number;
   mainlineName: string;
+  authorId: string | null;
   authorName: string | null;
   createdAt: string;
 }

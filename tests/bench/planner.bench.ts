@@ -3,13 +3,14 @@ import { join } from "node:path";
 import type { Benchmark } from "./benchmark";
 import { evaluatePlanner } from "../../components/rigs/evaluation";
 import { startingRig } from "../../lib/rig-form/starting-rig";
+import { DEFAULT_MINIMUM_CLEARANCE_M } from "../../physics";
 
 // The planner: one recompute of a rig as the browser does it on every walker move (Kit preparation and
 // the whole engine), timed here in Node; and, with BENCH_APP_URL set to a running app (`npm start`),
 // the planner page in Chromium: its first-load JavaScript as sent (gzipped) and the time from each
 // pointer move to the next frame with the figures and diagram redrawn, over 200 moves of a drag.
 
-const values = { ...startingRig({}), siteId: null };
+const values = { ...startingRig({}, DEFAULT_MINIMUM_CLEARANCE_M), siteId: null };
 const empty = { models: [], bench: [] };
 
 function percentile(values: number[], p: number): number {

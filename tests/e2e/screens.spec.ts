@@ -89,7 +89,11 @@ for (const size of WIDTHS) {
       await shot(page, "share-link", size.name);
       await page.getByRole("button", { name: "Revoke the link" }).click();
 
-      const settings = { minSafetyFactors: { webbing: 3, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: 3 }, allowSelfSignOff: false };
+      const settings = {
+        minSafetyFactors: { webbing: 3, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: 3 },
+        minClearanceM: 2,
+        allowSelfSignOff: false,
+      };
       const setUnits = (units: "si" | "us") =>
         page.evaluate(
           (body) =>

@@ -11,7 +11,12 @@ async function addMember(crewId: string, role: Role = "member") {
   return person;
 }
 
-const settings = { units: "us", minSafetyFactors: { webbing: 4, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: 3 }, allowSelfSignOff: false };
+const settings = {
+  units: "us",
+  minSafetyFactors: { webbing: 4, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: 3 },
+  minClearanceM: 2,
+  allowSelfSignOff: false,
+};
 
 // Each action, the least role allowed to do it (the table in lib/roles.ts), and how to attempt it.
 const actions: { name: string; least: Role; attempt: (client: AppClient, crew: FixtureCrew) => Promise<Response> }[] = [

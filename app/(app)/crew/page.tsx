@@ -21,7 +21,12 @@ export default async function CrewPage() {
       <PageHeader
         title={context.crew.name}
         lead={`You are ${withArticle(context.role)} of this crew.`}
-        actions={<Link href="/crew/settings">Crew settings</Link>}
+        actions={
+          <>
+            <Link href="/crew/settings">Crew settings</Link>
+            <Link href="/crew/checklist">On-site checklist</Link>
+          </>
+        }
       />
       <section aria-labelledby="people" className="space-y-3">
         <h2 id="people">People</h2>

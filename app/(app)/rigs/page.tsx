@@ -22,6 +22,9 @@ export default async function RigsPage() {
         lead="Plans for a line on a real span: drafted by a rigger, checked and signed off by the crew lead."
         actions={
           <>
+            <Link href="/rigs/readings" className={buttonClasses("secondary")}>
+              Measured tension
+            </Link>
             <Link href="/rigs/check" className={buttonClasses("secondary")}>
               Check a line
             </Link>

@@ -1,10 +1,9 @@
 import { NextResponse } from "next/server";
 import { crewRoute, parseBody } from "@/lib/api";
-import { invalidInput, RequestError } from "@/lib/http-errors";
+import { invalidInput } from "@/lib/http-errors";
 import { NewRigSchema, RigListQuerySchema } from "@/lib/validations/rigs";
-import { revisionOfRecord } from "@/lib/planner/revision-of-record";
+import { assertSiteOpen, revisionOfRecord } from "@/lib/planner/revision-of-record";
 import { createRig, findRevision, findRig, listRigs } from "@/db/rigs";
-import { findSite } from "@/db/sites";
 
 export const GET = crewRoute("rig.read", async ({ crew }, request) => {
   const query = RigListQuerySchema.safeParse(Object.fromEntries(request.nextUrl.searchParams));
@@ -14,11 +13,7 @@ export const GET = crewRoute("rig.read", async ({ crew }, request) => {
 
 export const POST = crewRoute("rig.write", async ({ crew, user }, request) => {
   const body = await parseBody(request, NewRigSchema);
-  if (body.siteId && (await findSite(crew.id, body.siteId))?.archivedAt) {
-    throw new RequestError(400, "Site: that site is archived; bring it back on its page before planning a new rig on it.", {
-      siteId: "This site is archived.",
-    });
-  }
+  await assertSiteOpen(crew.id, body.siteId);
   const revision = await revisionOfRecord(crew.id, crew.units, body);
   const { rigId, revisionId } = await createRig(crew.id, user, revision);
   return NextResponse.json({ rig: await findRig(crew.id, rigId), revision: await findRevision(crew.id, rigId, revisionId) }, { status: 201 });

@@ -43,6 +43,9 @@ export class AppClient {
   patch(path: string, body?: unknown) {
     return this.request("PATCH", path, body);
   }
+  put(path: string, body?: unknown) {
+    return this.request("PUT", path, body);
+  }
   delete(path: string) {
     return this.request("DELETE", path);
   }

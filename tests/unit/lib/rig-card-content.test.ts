@@ -104,7 +104,14 @@ describe("the rig card's content", () => {
   });
 
   it("reads clearance and backup catch as not computed for a result without them, and shows them when there", () => {
-    const rows = rowsOf(card());
+    // A revision saved by engine 1.0.0 has none of the clearance and backup-catch figures.
+    const older = structuredClone(result) as Omit<Partial<RigResult>, "leashFall"> & { leashFall: Partial<RigResult["leashFall"]> };
+    delete older.backupCatch;
+    delete older.backupCatchMissing;
+    delete older.clearance;
+    delete older.leashFall.lowestPointM;
+    delete older.leashFall.groundClearanceM;
+    const rows = rowsOf(card({ revision: { ...revision, result: older as unknown as RigResult } }));
     expect(rows["Ground clearance after a leash fall"]).toBe("not computed");
     expect(rows["Backup catch"]).toBe("not computed");
 

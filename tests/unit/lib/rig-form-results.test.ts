@@ -26,10 +26,13 @@ describe("comparing the browser's result with the server's", () => {
 describe("the starting rig", () => {
   it("is the worked example, valid for the shared schema, with the crew's minimums", () => {
     const crew = { webbing: 4, rope: 3, anchor: 5, connector: 3.5, sling: 3, pulley: 6, brake: 2 };
-    const rig = startingRig(crew);
+    const rig = startingRig(crew, 3.5);
     expect(RigInputSchema.safeParse(rig).success).toBe(true);
     expect(rig.spanM).toBe(example.spanM);
     expect(rig.minimumSafetyFactors).toEqual({ webbing: 4, connector: 3.5, sling: 3, anchor: 5, other: 6 });
+    // The brake's margin is the crew's minimum for brakes; the clearance below a fall is its own setting.
+    expect(rig.minimumBrakeMargin).toBe(2);
+    expect(rig.minimumClearanceM).toBe(3.5);
   });
 
   it("falls back to the engine's default for a minimum the crew has not set", () => {

@@ -43,7 +43,7 @@ describe("buildSlipTable", () => {
     const results = toSlipResults(tests);
     for (const c of table.cells) {
       const name = table.devices.find((d) => d.id === c.deviceId)!.name;
-      const check = checkBrake(name, c.ropeDiameterMm, results, 1000, 1);
+      const check = checkBrake(name, c.ropeDiameterMm, results, 1000, 1, 1);
       expect(check.governingLoad).toBe(c.lowestSlipN ?? c.highestHeldN);
       expect(check.lowerBoundOnly).toBe(c.lowestSlipN === null);
     }

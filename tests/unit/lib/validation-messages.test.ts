@@ -1,3 +1,4 @@
+import { messageInUnits } from "@/lib/rig-form/quantities";
 import { describe, expect, it } from "vitest";
 import type { ZodType } from "zod";
 import * as account from "@/lib/validations/account";
@@ -175,9 +176,13 @@ describe("other forms' messages", () => {
     const result = crew.CrewSettingsSchema.safeParse({
       units: "si",
       minSafetyFactors: { webbing: 0.5, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: "three" },
+      minClearanceM: -1,
       allowSelfSignOff: false,
     });
     const errors = result.success ? {} : fieldErrorsOf(result.error);
+    expect(errors.minClearanceM).toBe("Minimum clearance below a fall: from 0 m to 100 m.");
+    // The settings form shows it in the crew's units (100 m = 328.084 ft, NIST SP 811: 1 ft = 0.3048 m).
+    expect(messageInUnits(errors.minClearanceM, "length", "us")).toBe("Minimum clearance below a fall: from 0 ft to 328.084 ft.");
     expect(errors["minSafetyFactors.webbing"]).toBe("Webbing (mainline and backup): the minimum safety factor must be at least 1.5 (allowed 1.5–20).");
     expect(errors["minSafetyFactors.brake"]).toBe("Brake: enter a minimum safety factor from 1.5 to 20.");
   });

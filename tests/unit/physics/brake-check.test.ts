@@ -14,7 +14,7 @@ const bench: SlipResult[] = [
 
 describe("checkBrake", () => {
   it("holds with a margin over the lowest measured slip, and states the highest line tension held", () => {
-    const c = checkBrake("Demo cam", 11, bench, 9000, 6);
+    const c = checkBrake("Demo cam", 11, bench, 9000, 6, 1.5);
     expect(c.verdict).toBe("holds");
     expect(c.brakeForce).toBe(1500);
     expect(c.governingLoad).toBe(3900);
@@ -23,19 +23,32 @@ describe("checkBrake", () => {
   });
 
   it("slips at or above the lowest slip load, whatever a held-to result says", () => {
-    expect(checkBrake("Demo cam", 11, bench, 3900 * 6, 6).verdict).toBe("slips");
+    expect(checkBrake("Demo cam", 11, bench, 3900 * 6, 6, 1.5).verdict).toBe("slips");
   });
 
   it("treats held-to results only as a lower bound, never as a slip load", () => {
-    const within = checkBrake("demo cam ", 10, bench, 12000, 6);
+    const within = checkBrake("demo cam ", 10, bench, 12000, 6, 1.5);
     expect(within.verdict).toBe("holds");
     expect(within.lowerBoundOnly).toBe(true);
-    const beyond = checkBrake("Demo cam", 10, bench, 24000, 6);
+    const beyond = checkBrake("Demo cam", 10, bench, 24000, 6, 1.5);
     expect(beyond.verdict).toBe("untested");
   });
 
+  it("holds but below the crew's minimum margin gets its own verdict, for a measured slip and for a held-to bound", () => {
+    // 3900 / 1500 = 2.6 < 3; held to 3000 / (12000 / 6) = 1.5 < 2
+    const thin = checkBrake("Demo cam", 11, bench, 9000, 6, 3);
+    expect(thin.verdict).toBe("holds_below_margin");
+    expect(thin.minimumMargin).toBe(3);
+    expect(thin.message).toMatch(/below the crew's minimum of 3/);
+    expect(checkBrake("Demo cam", 10, bench, 12000, 6, 2).verdict).toBe("holds_below_margin");
+    // a margin equal to the minimum meets it
+    expect(checkBrake("Demo cam", 11, bench, 9000, 6, 2.6).verdict).toBe("holds");
+    // slipping stays slipping, whatever the minimum
+    expect(checkBrake("Demo cam", 11, bench, 3900 * 6, 6, 3).verdict).toBe("slips");
+  });
+
   it("is untested for a rope diameter with no results", () => {
-    const c = checkBrake("Demo cam", 12, bench, 9000, 6);
+    const c = checkBrake("Demo cam", 12, bench, 9000, 6, 1.5);
     expect(c.verdict).toBe("untested");
     expect(c.margin).toBeNull();
     expect(c.message).toMatch(/untested/);

@@ -72,6 +72,11 @@ describe("evaluateRig", () => {
     ["mainline.stretchPoints", [{ tensionKN: 0, elongationPct: 0 }]],
     ["anchors.a.layout", { kind: "bridle", includedAngleDeg: 200 }, "anchors.a.layout.includedAngleDeg"],
     ["tensioning.sheaveEfficiency", 1.5],
+    ["leashFall.hangBelowTieInM", -0.1],
+    ["leashFall.hangBelowTieInM", 6],
+    ["minimumClearanceM", -1],
+    ["minimumBrakeMargin", Infinity],
+    ["mainline.stretchPoints", Array.from({ length: 51 }, (_, i) => ({ tensionKN: i, elongationPct: i / 10 }))],
   ] as [string, unknown, string?][])("rejects %s = %j with a typed error naming the field", (path, value, field = path) => {
     let error: unknown;
     try {

@@ -2,6 +2,9 @@ import { describe, expect, it } from "vitest";
 import { leashFallPeak, lengthForPretension, lineForceDeflection, RigInputError, solveLine, STANDARD_GRAVITY } from "../../../physics";
 import { demoLine, MBS, relative, STIFF, STRETCHY } from "./fixtures";
 
+/** A linear spring P = k·u as a load path: load and the work k·u²/2. */
+const spring = (k: number) => (u: number) => ({ u, load: k * u, work: (k * u * u) / 2 });
+
 describe("leashFallPeak", () => {
   it("on a linear spring gives F = mg(1 + √(1 + 2kh/(mg))) (dynamics texts, mass dropped onto a spring) within 0.1 %", () => {
     for (const [m, h, k] of [
@@ -9,7 +12,7 @@ describe("leashFallPeak", () => {
       [60, 0.5, 15000],
       [100, 3, 600],
     ]) {
-      const peak = leashFallPeak(m, h, (u) => k * u);
+      const peak = leashFallPeak(m, h, spring(k));
       const mg = m * STANDARD_GRAVITY;
       expect(relative(peak.peakLoad, mg * (1 + Math.sqrt(1 + (2 * k * h) / mg)))).toBeLessThan(1e-3);
       // energy balanced at the peak
@@ -18,13 +21,13 @@ describe("leashFallPeak", () => {
   });
 
   it("with no free fall the peak is twice the static load (suddenly applied load)", () => {
-    const peak = leashFallPeak(70, 0, (u) => 3000 * u);
+    const peak = leashFallPeak(70, 0, spring(3000));
     expect(relative(peak.peakLoad, 2 * 70 * STANDARD_GRAVITY)).toBeLessThan(1e-9);
   });
 
   it("rejects a mass ≤ 0 and a negative fall", () => {
-    expect(() => leashFallPeak(0, 1, (u) => u)).toThrow(RigInputError);
-    expect(() => leashFallPeak(70, -1, (u) => u)).toThrow(RigInputError);
+    expect(() => leashFallPeak(0, 1, spring(1))).toThrow(RigInputError);
+    expect(() => leashFallPeak(70, -1, spring(1))).toThrow(RigInputError);
   });
 });
 
@@ -81,7 +84,7 @@ describe("leash fall on a real line against a dense quadrature (independent mode
       const length = lengthForPretension(line, c.pretension, "a", MBS).variables.length;
       const x = c.fraction * c.span;
       const forceDeflection = lineForceDeflection(line, length, x, MBS);
-      const engine = leashFallPeak(80, c.fall, forceDeflection.load, forceDeflection.kinkBetween);
+      const engine = leashFallPeak(80, c.fall, forceDeflection.state);
       const dense = denseFallPeak(80, c.fall, lineForceDeflection(line, length, x, MBS).load, 1.5 * engine.deflection);
       expect(relative(engine.peakLoad, dense.peakLoad)).toBeLessThan(1e-3);
       expect(relative(engine.deflection, dense.deflection)).toBeLessThan(1e-3);

@@ -13,6 +13,14 @@ import { plannerData } from "@/lib/planner/page-data";
 import { kitChangesSince, recordedCatalogue } from "@/lib/planner/kit";
 import { REVISION_STATE_LABELS } from "@/lib/validations/rigs";
 import { findRevision, findRig } from "@/db/rigs";
+import { Panel } from "@/components/ui/panel";
+import { SignOffStatus } from "@/components/review/sign-off-status";
+import { SubmitForReview } from "@/components/review/review-actions";
+import { ReuseForm } from "@/components/review/reuse-form";
+import { ChecklistRuns } from "@/components/review/checklist-runs";
+import { ReadingsPanel } from "@/components/review/readings-panel";
+import { AuditLog } from "@/components/review/audit-log";
+import { rigReviewData } from "@/lib/review/rig-review-data";
 
 export const metadata: Metadata = { title: "Rig" };
 
@@ -23,10 +31,16 @@ export default async function RigPage({ params, searchParams }: { params: Promis
   const rig = isUuid(id) ? await findRig(context.crew.id, id) : null;
   if (!rig) notFound();
   const revisionId = asked && isUuid(asked) ? asked : rig.head.id;
-  const [revision, data] = await Promise.all([findRevision(context.crew.id, rig.id, revisionId), plannerData(context.crew.id)]);
+  const [revision, data, review] = await Promise.all([
+    findRevision(context.crew.id, rig.id, revisionId),
+    plannerData(context.crew.id),
+    rigReviewData(context.crew.id, rig, context.crew.units),
+  ]);
   if (!revision) notFound();
   const isHead = revision.id === rig.head.id;
-  const mode = can(context.role, "rig.write") && isHead ? "edit" : "view";
+  // A revision in review is what the lead reads: it is returned or signed off before anyone edits the rig.
+  const mode = can(context.role, "rig.write") && isHead && revision.state !== "in_review" ? "edit" : "view";
+  const signed = review.signOff;
   // Reading a revision shows it as it was saved; editing uses the Kit and sites as they are now
   // (a site archived since stays offered to the rig that stands on it).
   const recordedSite = revision.snapshot.site;
@@ -69,6 +83,18 @@ export default async function RigPage({ params, searchParams }: { params: Promis
         <a href={`/api/rigs/${rig.id}/revisions/${revision.id}/card`}>Rig card as PDF</a>
       </p>
       <div className="space-y-6">
+        <SignOffStatus rigId={rig.id} signOff={signed} verification={review.verification} latest={rig.head} />
+        {review.reusedFrom ? (
+          <p>
+            Started from <Link href={`/rigs/${review.reusedFrom.rigId}`}>{review.reusedFrom.rigName}</Link>, signed-off revision {review.reusedFrom.number}.
+          </p>
+        ) : null}
+        {rig.head.state === "in_review" ? (
+          <p className="rounded-panel border-2 border-info-700 bg-info-100 p-3">
+            Revision {rig.head.number} is in review: the crew&apos;s leads and owners were asked to review it, and nobody changes the rig until one signs it off
+            or returns it. <Link href={`/rigs/${rig.id}/review`}>{can(context.role, "rig.sign") ? "Review it" : "See the review"}</Link>.
+          </p>
+        ) : null}
         <CautionNotice compact />
         <Planner
           key={revision.id}
@@ -80,12 +106,44 @@ export default async function RigPage({ params, searchParams }: { params: Promis
           revision={{ ...saved, rigId: rig.id }}
           kitChanges={mode === "edit" ? kitChangesSince(revision.snapshot, data.catalogue) : []}
         />
-        <section aria-labelledby="history" className="space-y-3 rounded-panel border border-ink-200 bg-white p-4 shadow-panel">
-          <h2 id="history" className="text-lg">
-            Revision history
-          </h2>
+        {isHead && rig.head.state === "draft" && can(context.role, "rig.submit") ? (
+          <Panel title="Submit for review" id="submit">
+            <SubmitForReview rigId={rig.id} revisionId={rig.head.id} revisionNumber={rig.head.number} />
+          </Panel>
+        ) : null}
+        {signed ? (
+          <Panel title={`On site: signed-off revision ${signed.revisionNumber}`} id="on-site">
+            <h3 className="font-semibold">Checklist</h3>
+            <ChecklistRuns rigId={rig.id} revisionId={signed.revisionId} canRun={can(context.role, "checklist.run")} hasTemplate={review.hasChecklist} />
+            <h3 className="pt-2 font-semibold">Measured tension</h3>
+            <p className="text-sm text-ink-600">
+              A load cell&apos;s reading beside the engine&apos;s prediction for the same conditions on this revision. A large difference means the line, the
+              stretch curve or the reading is not what the plan assumed: find out why before anyone walks.
+            </p>
+            <ReadingsPanel
+              rigId={rig.id}
+              revisionId={signed.revisionId}
+              units={data.units}
+              canRecord={can(context.role, "reading.write")}
+              readAt={review.signedReadAt}
+            />
+          </Panel>
+        ) : null}
+        {signed && can(context.role, "rig.reuse") ? (
+          <Panel title="Use this rig for another site or day" id="reuse">
+            <p className="text-sm text-ink-600">
+              Starts a new rig whose first draft is signed-off revision {signed.revisionNumber}, checked again with the Kit as it is now. It needs its own
+              sign-off.
+            </p>
+            <ReuseForm rigId={rig.id} revisionId={signed.revisionId} rigName={rig.name} sites={data.sites} siteId={rig.siteId} />
+          </Panel>
+        ) : null}
+        <Panel title="Revision history" id="history">
           <RevisionHistory rigId={rig.id} units={data.units} catalogue={data.catalogue} />
-        </section>
+        </Panel>
+        <Panel title="What happened" id="audit-log">
+          <AuditLog entries={review.auditLog} />
+        </Panel>
       </div>
     </>
   );

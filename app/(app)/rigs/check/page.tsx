@@ -26,7 +26,13 @@ export default async function LineCheckPage() {
       />
       <div className="space-y-6">
         <CautionNotice />
-        <Planner mode="check" units={data.units} catalogue={data.catalogue} sites={data.sites} start={{ ...startingRig(data.minimums), siteId: null }} />
+        <Planner
+          mode="check"
+          units={data.units}
+          catalogue={data.catalogue}
+          sites={data.sites}
+          start={{ ...startingRig(data.minimums, data.minClearanceM), siteId: null }}
+        />
       </div>
     </>
   );

@@ -15,7 +15,7 @@ export default async function NewRigPage({ searchParams }: { searchParams: Promi
   if (refusal) return <RoleRequired title="New rig" refusal={refusal} back={{ href: "/rigs", label: "Back to the rigs" }} />;
   const data = await plannerData(context.crew.id);
   const site = data.sites.find((s) => s.id === siteId) ?? null;
-  const example = startingRig(data.minimums);
+  const example = startingRig(data.minimums, data.minClearanceM);
   const start = site
     ? { ...example, name: `${site.name} line`, siteId: site.id, spanM: site.spanM, heightDifferenceM: site.heightDifferenceM }
     : { ...example, name: "New rig", siteId: null };

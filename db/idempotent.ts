@@ -1,0 +1,13 @@
+import "server-only";
+import type { Knex } from "knex";
+
+/**
+ * Inserts a row once per idempotency key: a write replayed with the same key (a phone resending what it
+ * queued offline) finds the row the first one made and changes nothing.
+ */
+export async function insertOnce<Row>(trx: Knex.Transaction, table: string, row: Record<string, unknown>): Promise<{ row: Row; replayed: boolean }> {
+  const [inserted] = await trx(table).insert(row).onConflict(["crew_id", "idempotency_key"]).ignore().returning("*");
+  if (inserted) return { row: inserted as Row, replayed: false };
+  const existing = await trx(table).where({ crew_id: row.crew_id, idempotency_key: row.idempotency_key }).first();
+  return { row: existing as Row, replayed: true };
+}

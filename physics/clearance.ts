@@ -1,0 +1,90 @@
+/**
+ * The trade's rule of thumb for how high to rig a highline: at least a third of its length plus 3 m above
+ * the ground, or a fall held only by the backup may reach it. The length is taken as the span.
+ */
+export const RULE_OF_THUMB = {
+  source: "Swiss Slackline Association, “Highlining – the 10 most important points”, 2014",
+  heightAboveGroundM: (spanM: number) => spanM / 3 + 3,
+} as const;
+
+/** Crew minimum clearance when the crew has set none: 2 m (common practice, no source). */
+export const DEFAULT_MINIMUM_CLEARANCE_M = 2;
+
+/** Fall positions worked out exactly before the search, as shares of the span (denser near the anchors, where an edge is usually closest). */
+const SCAN = [0.02, 0.1, 0.25, 0.5, 0.75, 0.9, 0.98];
+/** Fall positions searched: from 1 % to 99 % of the span (the line cannot deflect at an anchor). */
+const FIRST = 0.01;
+const LAST = 0.99;
+/** Step of the search over the interpolated lowest point, and of the exact check on either side of its minimum, shares of the span. */
+const SEARCH_STEP = 0.005;
+const CHECK_STEP = 0.01;
+
+export interface LowestClearance {
+  clearanceM: number;
+  positionM: number;
+}
+
+/**
+ * Piecewise cubic Hermite interpolation with the Fritsch–Carlson slopes (Fritsch & Carlson, "Monotone
+ * piecewise cubic interpolation", SIAM J. Numer. Anal. 17, 1980): no overshoot between the knots.
+ */
+export function monotoneCubic(xs: readonly number[], ys: readonly number[]): (x: number) => number {
+  const n = xs.length;
+  const h = xs.slice(1).map((x, i) => x - xs[i]);
+  const d = h.map((hi, i) => (ys[i + 1] - ys[i]) / hi);
+  const m = xs.map((_, i) => {
+    if (i === 0) return d[0];
+    if (i === n - 1) return d[n - 2];
+    if (d[i - 1] * d[i] <= 0) return 0;
+    const w1 = 2 * h[i] + h[i - 1];
+    const w2 = h[i] + 2 * h[i - 1];
+    return (w1 + w2) / (w1 / d[i - 1] + w2 / d[i]);
+  });
+  return (x: number) => {
+    let i = 0;
+    while (i < n - 2 && x > xs[i + 1]) i++;
+    const t = (x - xs[i]) / h[i];
+    const t2 = t * t;
+    const t3 = t2 * t;
+    return (2 * t3 - 3 * t2 + 1) * ys[i] + (t3 - 2 * t2 + t) * h[i] * m[i] + (-2 * t3 + 3 * t2) * ys[i + 1] + (t3 - t2) * h[i] * m[i + 1];
+  };
+}
+
+/**
+ * The lowest clearance of a fall over positions along the span, and where. `lowestPointAt(x)` is the
+ * walker's lowest point after a fall at x, worked out exactly (a whole catch each), so it is called at few
+ * positions: at the scan above, in order along the span; then its monotone interpolation through those and
+ * the anchors (where the walker hangs `hangAtAnchors` below each anchor) is searched against the ground at
+ * every half per cent of the span and at every ground point; the best of those and the positions one per
+ * cent either side are worked out exactly. The answer is the lowest exact clearance found: a figure of a
+ * real fall position, never an interpolated one.
+ */
+export function lowestClearance(
+  span: number,
+  rise: number,
+  hangAtAnchors: number,
+  groundAt: (x: number) => number,
+  groundXs: readonly number[],
+  lowestPointAt: (x: number) => number,
+): LowestClearance {
+  const exact = new Map<number, number>();
+  const clearanceAt = (x: number) => {
+    let c = exact.get(x);
+    if (c === undefined) {
+      c = lowestPointAt(x) - groundAt(x);
+      exact.set(x, c);
+    }
+    return c;
+  };
+  const scanXs = SCAN.map((f) => f * span);
+  const scanLowest = scanXs.map((x) => clearanceAt(x) + groundAt(x));
+  const estimate = monotoneCubic([0, ...scanXs, span], [-hangAtAnchors, ...scanLowest, rise - hangAtAnchors]);
+  const candidates = [...groundXs.filter((x) => x > FIRST * span && x < LAST * span)];
+  for (let f = FIRST; f <= LAST + 1e-9; f += SEARCH_STEP) candidates.push(Math.min(f, LAST) * span);
+  let best = candidates[0];
+  for (const x of candidates) if (estimate(x) - groundAt(x) < estimate(best) - groundAt(best)) best = x;
+  for (const x of [best - CHECK_STEP * span, best, best + CHECK_STEP * span]) clearanceAt(Math.min(Math.max(x, FIRST * span), LAST * span));
+  let result: LowestClearance = { clearanceM: Infinity, positionM: NaN };
+  for (const [x, c] of exact) if (c < result.clearanceM) result = { clearanceM: c, positionM: x };
+  return result;
+}
