@@ -5,7 +5,7 @@ import example from "@/physics/examples/quarry-highline.json";
 import { CAUTIONS, evaluateRig, type RigResult } from "@/physics";
 import { rigCardContent, type RigCardContent, type RigCardSource } from "@/lib/rig-card/content";
 import { drawableText, isDrawn } from "@/lib/rig-card/glyphs";
-import { formatCapacity, formatDepth, formatLoad } from "@/lib/rig-form/format";
+import { formatCapacity, formatDepth, formatDistance, formatLoad, formatQuantity } from "@/lib/rig-form/format";
 
 const result = evaluateRig(example);
 const revision = {
@@ -97,6 +97,27 @@ describe("the rig card's content", () => {
       expect(components[i]).toMatchObject({ name: f.name, factor: f.shown, mbs: formatCapacity(f.mbs, "us"), peakLoad: formatLoad(f.peakLoad, "us") });
       expect(components[i].result).toBe(f.passes ? "Passes" : "Fails");
     });
+  });
+
+  it("gives the lowest clearance over the span against the crew's minimum, and the rule of thumb beside it", () => {
+    const ground = {
+      points: [
+        { xM: 0, heightM: -30 },
+        { xM: 60, heightM: -40 },
+        { xM: 120, heightM: -30 },
+      ],
+    };
+    const onGround = evaluateRig({ ...example, ground });
+    const rows = rowsOf(card({ revision: { ...revision, inputs: { ...example, ground }, result: onGround } }));
+    const lowest = onGround.clearance.leashFall!;
+    expect(rows["Lowest clearance over the span, leash fall"]).toBe(
+      `${formatQuantity(lowest.clearanceM, "length", "si", "down")} at ${formatDistance(lowest.positionM, "si")} from A`,
+    );
+    expect(rows["Crew's minimum clearance"]).toBe("2.00 m");
+    // A highline at least a third of its length plus 3 m above the ground (Swiss Slackline Association, 2014): 120 m / 3 + 3 m = 43 m.
+    const rule = Object.entries(rows).find(([label]) => label.startsWith("Rule of thumb"))!;
+    expect(rule[1]).toMatch(/; rule at least 43\.00 m$/);
+    expect(rule[0]).toContain("Swiss Slackline Association");
   });
 
   it("carries every caution of the result", () => {
