@@ -73,28 +73,55 @@ export interface RigCardSource {
 /** A moment as the card prints it: unambiguous on paper, whatever the reader's time zone. */
 export const cardTime = (at: string | Date) => `${new Date(at).toISOString().slice(0, 16).replace("T", " ")} UTC`;
 
-interface ClearanceFigures {
-  lowestPointM?: number | null;
-  groundClearanceM?: number | null;
-}
-interface CatchFigures extends ClearanceFigures {
-  peakLoadN: number;
-  peakAnchorLoadN: number;
-  fallHeightM: number;
+/**
+ * Figures engine 1.1.0 added to the result (ground clearance, the backup's catch). A revision saved by an
+ * earlier engine has none, so each is read as possibly missing: undefined is "not computed", null "does not apply".
+ */
+type LaterFields = "backupCatch" | "backupCatchMissing" | "clearance";
+type LaterFallFields = "lowestPointM" | "groundClearanceM";
+type ClearanceFigures = Partial<Pick<RigResult["leashFall"], LaterFallFields>>;
+type StoredResult = Omit<RigResult, LaterFields | "leashFall"> &
+  Partial<Pick<RigResult, LaterFields>> & { leashFall: Omit<RigResult["leashFall"], LaterFallFields> & ClearanceFigures };
+type LowestClearance = RigResult["clearance"]["leashFall"];
+
+function laterFigures(result: StoredResult) {
+  return {
+    leashFall: result.leashFall,
+    backupCatch: result.backupCatch,
+    backupMissing: result.backupCatchMissing,
+    groundGiven: result.clearance?.groundGiven,
+    clearance: result.clearance,
+  };
 }
 
-/**
- * Figures a later engine adds to the result (ground clearance, the backup's catch). A revision saved
- * before them has none, so each is read as possibly missing: undefined is "not computed", null "does not apply".
- */
-function laterFigures(result: RigResult) {
-  const r = result as RigResult & { backupCatch?: CatchFigures | null; backupCatchMissing?: string | null; clearance?: { groundGiven?: boolean } };
-  return {
-    leashFall: result.leashFall as RigResult["leashFall"] & ClearanceFigures,
-    backupCatch: r.backupCatch,
-    backupMissing: r.backupCatchMissing,
-    groundGiven: r.clearance?.groundGiven,
-  };
+/** The lowest clearance over fall positions along the span, against the crew's minimum, and the trade's rule of thumb beside it. */
+function clearanceRows(clearance: StoredResult["clearance"], units: UnitSystem): CardRow[] {
+  if (!clearance?.groundGiven) return [];
+  const lowest = (what: string, c: LowestClearance): CardRow[] =>
+    c
+      ? [
+          {
+            label: `Lowest clearance over the span, ${what}`,
+            value: `${formatClearance(c.clearanceM, units)} at ${formatDistance(c.positionM, units)} from A${c.passes ? "" : ", below the crew's minimum"}`,
+            alert: !c.passes,
+          },
+        ]
+      : [];
+  const rule = clearance.ruleOfThumb;
+  return [
+    ...lowest("leash fall", clearance.leashFall),
+    ...lowest("backup catch", clearance.backupCatch),
+    { label: "Crew's minimum clearance", value: formatDistance(clearance.minimumM, units) },
+    ...(rule.midSpanHeightAboveGroundM !== null
+      ? [
+          {
+            label: `Rule of thumb, a third of the span plus 3 m (${rule.source})`,
+            value: `line ${formatClearance(rule.midSpanHeightAboveGroundM, units)} above the ground at mid-span; rule at least ${formatDepth(rule.heightAboveGroundM, units)}`,
+            alert: rule.midSpanHeightAboveGroundM < rule.heightAboveGroundM,
+          },
+        ]
+      : []),
+  ];
 }
 
 // A clearance is a reserve: never shown larger than computed.
@@ -159,7 +186,7 @@ export function rigCardContent(source: RigCardSource): RigCardContent {
   const input = parseRigInput(revision.inputs);
   const result = revision.result;
   const { walker, unloaded, sweep, tensioning, brake, anchors, safetyFactors } = result;
-  const later = laterFigures(result);
+  const later = laterFigures(result as StoredResult);
   const worstWalking = Math.max(sweep.worstTensionA.tensionA, sweep.worstTensionB.tensionB);
   const atWalker = `Walker at ${formatDistance(walker.positionM, units)} from A`;
   const atLeast = brake.lowerBoundOnly ? "at least " : "";
@@ -242,6 +269,7 @@ export function rigCardContent(source: RigCardSource): RigCardContent {
         { label: "Free fall before the line takes the load", value: formatDepth(later.leashFall.fallHeightM, units) },
         { label: "Ground clearance after a leash fall", value: clearanceText(later.leashFall, later.groundGiven, units) },
         ...backupRows,
+        ...clearanceRows(later.clearance, units),
       ],
     },
     { title: "Anchors (peak loads: walker anywhere or a fall)", rows: anchorRows },

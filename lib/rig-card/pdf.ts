@@ -4,6 +4,7 @@ import path from "node:path";
 import PDFDocument from "pdfkit";
 import QRCode from "qrcode";
 import type { CardComponent, CardRow, CardSection, RigCardContent } from "./content";
+import { drawableText } from "./glyphs";
 
 // The rig card as a one-page A4 PDF, black on white, in the shipped Inter (static latin woff files, which
 // pdfkit embeds). Everything is laid out twice: measured at a type size, shrunk until it fits one page,
@@ -37,8 +38,19 @@ interface Attempt {
 }
 
 /** The type sizes and gaps of one attempt. */
-function sizes({ scale, cellLines }: Attempt) {
-  return { title: 17 * scale, body: 8 * scale, small: 6.8 * scale, heading: 9.5 * scale, band: 24 * Math.max(scale, 0.8), gap: 3 * scale, cellLines };
+function sizes({ scale, cellLines, splitTable }: Attempt) {
+  // With the table in halves, a long gear name in the figures is cut at three lines: it is in the table too.
+  const valueLines = splitTable ? 3 : Infinity;
+  return {
+    title: 17 * scale,
+    body: 8 * scale,
+    small: 6.8 * scale,
+    heading: 9.5 * scale,
+    band: 24 * Math.max(scale, 0.8),
+    gap: 3 * scale,
+    cellLines,
+    valueLines,
+  };
 }
 type Sizes = ReturnType<typeof sizes>;
 
@@ -50,11 +62,20 @@ class Pen {
   constructor(
     readonly doc: Doc,
     readonly draw: boolean,
+    // Laying text out is the costly part; every attempt and the drawing measure the same boxes again.
+    private readonly measured = new Map<string, number>(),
   ) {}
+
+  /** The same pen measuring only (for the column split). */
+  measuring(): Pen {
+    return new Pen(this.doc, false, this.measured);
+  }
 
   height(text: string, font: Font, size: number, width: number, maxLines = Infinity): number {
     this.doc.font(font).fontSize(size);
-    const full = this.doc.heightOfString(text, { width, lineGap: 0.5 });
+    const key = `${font}|${size}|${width}|${text}`;
+    let full = this.measured.get(key);
+    if (full === undefined) this.measured.set(key, (full = this.doc.heightOfString(text, { width, lineGap: 0.5 })));
     return Math.min(full, maxLines * this.doc.currentLineHeight(true) + 0.5 * maxLines);
   }
 
@@ -96,9 +117,9 @@ function rowsBlock(pen: Pen, rows: CardRow[], x: number, y: number, width: numbe
     pen.doc.font("bold").fontSize(s.body);
     const valueWidth = Math.min(pen.doc.widthOfString(row.value) + 1, width * 0.55);
     const labelWidth = width - valueWidth - 6;
-    const h = Math.max(pen.height(row.label, "regular", s.body, labelWidth), pen.height(row.value, "bold", s.body, valueWidth));
+    const h = Math.max(pen.height(row.label, "regular", s.body, labelWidth), pen.height(row.value, "bold", s.body, valueWidth, s.valueLines));
     pen.text(row.label, x, at + s.gap / 2, row.alert ? "bold" : "regular", s.body, labelWidth);
-    pen.text(row.value, x + labelWidth + 6, at + s.gap / 2, "bold", s.body, valueWidth, { align: "right" });
+    pen.text(row.value, x + labelWidth + 6, at + s.gap / 2, "bold", s.body, valueWidth, { align: "right", maxLines: s.valueLines });
     // A failing or unknown check carries a black bar: it must stand out without colour.
     if (row.alert && pen.draw) pen.doc.rect(x - 5, at + s.gap / 3, 2.5, h + s.gap / 3).fill(INK);
     at += h + s.gap;
@@ -119,7 +140,7 @@ function section(pen: Pen, sec: CardSection, x: number, y: number, width: number
 
 /** Splits the sections into two columns in their order, where the taller column is lowest. */
 function columns(pen: Pen, sections: CardSection[], width: number, s: Sizes): [CardSection[], CardSection[]] {
-  const heights = sections.map((sec) => section(new Pen(pen.doc, false), sec, 0, 0, width, s));
+  const heights = sections.map((sec) => section(pen.measuring(), sec, 0, 0, width, s));
   let best = 1;
   let bestHeight = Infinity;
   for (let split = 1; split < sections.length; split++) {
@@ -144,24 +165,26 @@ type Column = (typeof COMPONENT_COLUMNS)[number];
 const resultText = (component: CardComponent) => (component.result === "Fails" ? "FAILS" : component.result);
 const cellText = (component: CardComponent, c: Column) => (c.key === "result" ? resultText(component) : component[c.key]);
 
-/** Column widths: the figures and verdicts as wide as their widest cell, never cut; names and places share the rest. */
+/** Column widths: figures, verdicts and places as wide as their widest cell (a place up to 45 % of the rest); the name takes what is left. */
 function columnWidths(pen: Pen, components: CardComponent[], width: number, s: Sizes): number[] {
   pen.doc.font("bold").fontSize(s.body);
-  const widest = (c: Column) => Math.max(...[c.header, ...components.map((k) => cellText(k, c))].map((t) => pen.doc.widthOfString(t))) + 6;
+  // Headers may wrap to two lines; the cells never.
+  const widest = (c: Column) => Math.max(...[...c.header.split(" "), ...components.map((k) => cellText(k, c))].map((t) => pen.doc.widthOfString(t))) + 6;
   const fixed = COMPONENT_COLUMNS.map((c) => (c.key === "name" || c.key === "where" ? 0 : widest(c)));
   const rest = width - fixed.reduce((a, b) => a + b, 0);
-  return COMPONENT_COLUMNS.map((c, i) => (c.key === "name" ? rest * 0.62 : c.key === "where" ? rest * 0.38 : fixed[i]));
+  const where = Math.min(widest(COMPONENT_COLUMNS.find((c) => c.key === "where")!), rest * 0.45);
+  return COMPONENT_COLUMNS.map((c, i) => (c.key === "name" ? rest - where : c.key === "where" ? where : fixed[i]));
 }
 
 /** One column of the component table (header, then the rows); returns its height. */
 function tableColumn(pen: Pen, components: CardComponent[], x: number, y: number, width: number, s: Sizes): number {
   let at = y;
   const widths = columnWidths(pen, components, width, s);
-  const line = (cell: (c: Column) => string, font: (c: Column) => Font) => {
+  const line = (cell: (c: Column) => string, font: (c: Column) => Font, maxLines = s.cellLines) => {
     let left = x;
     let h = 0;
     COMPONENT_COLUMNS.forEach((c, i) => {
-      h = Math.max(h, pen.text(cell(c), left, at + s.gap / 2, font(c), s.body, widths[i] - 4, { align: c.align, maxLines: s.cellLines }));
+      h = Math.max(h, pen.text(cell(c), left, at + s.gap / 2, font(c), s.body, widths[i] - 4, { align: c.align, maxLines }));
       left += widths[i];
     });
     at += h + s.gap;
@@ -170,6 +193,7 @@ function tableColumn(pen: Pen, components: CardComponent[], x: number, y: number
   line(
     (c) => c.header,
     () => "bold",
+    2,
   );
   for (const component of components) {
     line(
@@ -235,16 +259,17 @@ function cautionsBlock(pen: Pen, cautions: readonly string[], y: number, s: Size
   return at - y + 2 * s.gap;
 }
 
-/** Lays the whole card out from the top; returns where it ends. */
-function layout(doc: Doc, draw: boolean, content: RigCardContent, qr: Buffer | null, attempt: Attempt): number {
-  const pen = new Pen(doc, draw);
+/** Lays the whole card out from the top (drawing it when given the QR code); returns where it ends. */
+function layout(doc: Doc, measured: Map<string, number>, content: RigCardContent, qr: Buffer | null, attempt: Attempt): number {
+  const draw = qr !== null;
+  const pen = new Pen(doc, draw, measured);
   const s = sizes(attempt);
   const headWidth = WIDTH - QR_SIZE - GUTTER;
   let y = MARGIN;
   y += pen.text("SPANWRIGHT RIG CARD", MARGIN, y, "bold", s.small, headWidth) + 2;
   y += pen.text(content.rigName, MARGIN, y, "bold", s.title, headWidth, { maxLines: 2 }) + 3;
   y += pen.text(content.about, MARGIN, y, "regular", s.body, headWidth) + 2;
-  if (draw && qr) {
+  if (qr) {
     doc.image(qr, PAGE.width - MARGIN - QR_SIZE, MARGIN - 4, { width: QR_SIZE, height: QR_SIZE });
     pen.text("Scan for this revision", PAGE.width - MARGIN - QR_SIZE, MARGIN + QR_SIZE - 4, "regular", s.small, QR_SIZE, { align: "center" });
   }
@@ -264,10 +289,11 @@ function layout(doc: Doc, draw: boolean, content: RigCardContent, qr: Buffer | n
 
 const steps = (from: number, to: number) => Array.from({ length: Math.round((from - to) / 0.05) + 1 }, (_, i) => from - i * 0.05);
 
-// Largest type first; then cells cut to a line, the table in two halves, and last every caution cut to a line (none dropped).
+// Largest type first; then the table in two halves, then cells cut to a line, and last every caution cut to a line (none
+// dropped). A component's name keeps two lines as long as it can: it is what tells the rows apart.
 const ATTEMPTS: Attempt[] = [
   ...steps(1, 0.7).map((scale) => ({ scale, cellLines: 2, splitTable: false, shortCautions: false })),
-  ...steps(0.8, 0.6).map((scale) => ({ scale, cellLines: 1, splitTable: false, shortCautions: false })),
+  ...steps(0.8, 0.6).map((scale) => ({ scale, cellLines: 2, splitTable: true, shortCautions: false })),
   ...steps(0.8, 0.6).map((scale) => ({ scale, cellLines: 1, splitTable: true, shortCautions: false })),
   ...steps(0.65, 0.55).map((scale) => ({ scale, cellLines: 1, splitTable: true, shortCautions: true })),
 ];
@@ -275,8 +301,8 @@ const ATTEMPTS: Attempt[] = [
 const BOTTOM = PAGE.height - MARGIN;
 
 /** The largest layout of the card that fits on the page, or null when even the smallest does not. */
-function fittingAttempt(doc: Doc, content: RigCardContent): Attempt | null {
-  return ATTEMPTS.find((a) => layout(doc, false, content, null, a) <= BOTTOM) ?? null;
+function fittingAttempt(doc: Doc, measured: Map<string, number>, content: RigCardContent): Attempt | null {
+  return ATTEMPTS.find((a) => layout(doc, measured, content, null, a) <= BOTTOM) ?? null;
 }
 
 function cardDocument(content: RigCardContent): Doc {
@@ -292,15 +318,33 @@ function cardDocument(content: RigCardContent): Doc {
 }
 
 /** Whether the card fits one page at some size (for the tests: the PDF is drawn at the smallest even when not). */
-export const rigCardFits = (content: RigCardContent) => fittingAttempt(cardDocument(content), content) !== null;
+export const rigCardFits = (source: RigCardContent) => {
+  const content = drawableContent(source);
+  return fittingAttempt(cardDocument(content), new Map(), content) !== null;
+};
+
+/** The content with every text drawable in the shipped font; the footer says so when a name had to change. */
+function drawableContent(content: RigCardContent): RigCardContent {
+  let changed = false;
+  const drawn: RigCardContent = JSON.parse(JSON.stringify(content), (_key, value) => {
+    if (typeof value !== "string") return value;
+    const d = drawableText(value);
+    changed ||= d.changed;
+    return d.text;
+  });
+  if (changed) drawn.footer += " Letters this card's font does not have are written without their accents (or as ?): the print page shows names as saved.";
+  return drawn;
+}
 
 /** The rig card as PDF bytes: one A4 page. */
-export async function rigCardPdf(content: RigCardContent): Promise<Buffer> {
+export async function rigCardPdf(source: RigCardContent): Promise<Buffer> {
+  const content = drawableContent(source);
   const qr = await QRCode.toBuffer(content.rigUrl, { type: "png", errorCorrectionLevel: "M", margin: 1, scale: 6 });
   const doc = cardDocument(content);
-  const attempt = fittingAttempt(doc, content);
+  const measured = new Map<string, number>();
+  const attempt = fittingAttempt(doc, measured, content);
   if (!attempt) console.error(`Rig card for "${content.rigName}": even the smallest layout runs past the page; drawn at the smallest.`);
-  layout(doc, true, content, qr, attempt ?? ATTEMPTS[ATTEMPTS.length - 1]);
+  layout(doc, measured, content, qr, attempt ?? ATTEMPTS[ATTEMPTS.length - 1]);
 
   const chunks: Buffer[] = [];
   doc.on("data", (chunk: Buffer) => chunks.push(chunk));

@@ -1,6 +1,7 @@
 import fs from "node:fs/promises";
 import { test, expect } from "@playwright/test";
 import { PDFParse } from "pdf-parse";
+import AxeBuilder from "@axe-core/playwright";
 import { signInAs } from "./support/sign-in";
 
 // A member takes a rig to the site: the rig card from the rig page, printed without the app's frame, and its PDF
@@ -17,6 +18,9 @@ test("a member opens the rig card from the rig page, prints it without the app's
   await expect(card.getByRole("region", { name: "Sign-off" })).toContainText(/SIGNED OFF|SUPERSEDED/);
   await expect(card).toContainText("Pretension target, nobody on the line");
   await expect(card.getByRole("img", { name: "QR code: opens this revision of the rig" })).toBeVisible();
+
+  const serious = (await new AxeBuilder({ page }).analyze()).violations.filter((v) => v.impact === "serious" || v.impact === "critical");
+  expect(serious.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`)).toEqual([]);
 
   // On paper: the card alone, no sections, no buttons.
   await expect(page.getByRole("link", { name: "Kit", exact: true })).toBeVisible();

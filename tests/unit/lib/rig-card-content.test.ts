@@ -4,7 +4,8 @@ import { unit } from "mathjs";
 import example from "@/physics/examples/quarry-highline.json";
 import { CAUTIONS, evaluateRig, type RigResult } from "@/physics";
 import { rigCardContent, type RigCardContent, type RigCardSource } from "@/lib/rig-card/content";
-import { formatCapacity, formatDepth, formatLoad } from "@/lib/rig-form/format";
+import { drawableText, isDrawn } from "@/lib/rig-card/glyphs";
+import { formatCapacity, formatDepth, formatDistance, formatLoad, formatQuantity } from "@/lib/rig-form/format";
 
 const result = evaluateRig(example);
 const revision = {
@@ -98,6 +99,27 @@ describe("the rig card's content", () => {
     });
   });
 
+  it("gives the lowest clearance over the span against the crew's minimum, and the rule of thumb beside it", () => {
+    const ground = {
+      points: [
+        { xM: 0, heightM: -30 },
+        { xM: 60, heightM: -40 },
+        { xM: 120, heightM: -30 },
+      ],
+    };
+    const onGround = evaluateRig({ ...example, ground });
+    const rows = rowsOf(card({ revision: { ...revision, inputs: { ...example, ground }, result: onGround } }));
+    const lowest = onGround.clearance.leashFall!;
+    expect(rows["Lowest clearance over the span, leash fall"]).toBe(
+      `${formatQuantity(lowest.clearanceM, "length", "si", "down")} at ${formatDistance(lowest.positionM, "si")} from A`,
+    );
+    expect(rows["Crew's minimum clearance"]).toBe("2.00 m");
+    // A highline at least a third of its length plus 3 m above the ground (Swiss Slackline Association, 2014): 120 m / 3 + 3 m = 43 m.
+    const rule = Object.entries(rows).find(([label]) => label.startsWith("Rule of thumb"))!;
+    expect(rule[1]).toMatch(/; rule at least 43\.00 m$/);
+    expect(rule[0]).toContain("Swiss Slackline Association");
+  });
+
   it("carries every caution of the result", () => {
     expect(card().cautions).toEqual(CAUTIONS);
   });
@@ -130,21 +152,32 @@ describe("the rig card's content", () => {
     expect(rowsOf(card({ revision: { ...revision, result: noBackup } }))["Backup catch"]).toBe("No backup given: its catch is not worked out.");
   });
 
+  // The subset's coverage as the font package states it (@fontsource/inter, 400.css: the latin block's unicode-range).
+  const css = fs.readFileSync("node_modules/@fontsource/inter/400.css", "utf8");
+  const ranges = css
+    .match(/inter-latin-400-normal\.woff2[^}]*unicode-range:\s*([^;]+);/)![1]
+    .split(",")
+    .map((r) =>
+      r
+        .trim()
+        .slice(2)
+        .split("-")
+        .map((h) => parseInt(h, 16)),
+    )
+    .map(([from, to]) => [from, to ?? from]);
+  const drawn = (c: string) => ranges.some(([from, to]) => c.codePointAt(0)! >= from && c.codePointAt(0)! <= to);
+
+  it("knows which characters the shipped font draws, as the font package states them", () => {
+    for (let code = 0; code <= 0xffff; code++) {
+      if (code >= 0xd800 && code <= 0xdfff) continue;
+      const c = String.fromCodePoint(code);
+      if (isDrawn(c) !== drawn(c)) expect.fail(`U+${code.toString(16)}: isDrawn ${isDrawn(c)}, the font package ${drawn(c)}`);
+    }
+    expect(drawableText("Łódź, Špičák, Ελλάδα")).toEqual({ text: "Lódz, Spicák, ??????", changed: true });
+    expect(drawableText("Foxglove gap — revision 2")).toEqual({ text: "Foxglove gap — revision 2", changed: false });
+  });
+
   it("writes only characters the shipped Inter latin subset draws", () => {
-    // The subset's coverage as the font package states it (@fontsource/inter, 400.css: the latin block's unicode-range).
-    const css = fs.readFileSync("node_modules/@fontsource/inter/400.css", "utf8");
-    const ranges = css
-      .match(/inter-latin-400-normal\.woff2[^}]*unicode-range:\s*([^;]+);/)![1]
-      .split(",")
-      .map((r) =>
-        r
-          .trim()
-          .slice(2)
-          .split("-")
-          .map((h) => parseInt(h, 16)),
-      )
-      .map(([from, to]) => [from, to ?? from]);
-    const drawn = (c: string) => ranges.some(([from, to]) => c.codePointAt(0)! >= from && c.codePointAt(0)! <= to);
     for (const units of ["si", "us"] as const) {
       for (const state of ["draft", "superseded", "signed_off"] as const) {
         const content = card({ units, revision: { ...revision, state }, signOff, standing: { ...signOff, revisionNumber: 3 } });

@@ -81,6 +81,14 @@ describe("the rig card PDF", () => {
     for (const caution of CAUTIONS) expect(text).toContain(caution.slice(0, 40));
   });
 
+  it("spells letters the font lacks without their accents, and says so", async () => {
+    const { text } = await read(await rigCardPdf(rigCardContent(source(example, { rigName: "Łódź gap", siteName: "Špičák" }))));
+    expect(text).toContain("Lódz gap");
+    expect(text).toContain("Site: Spicák");
+    expect(text).toContain("written without their accents");
+    expect((await read(await rigCardPdf(rigCardContent(source(example))))).text).not.toContain("without their accents");
+  });
+
   it("shows the sign-off and no NOT SIGNED OFF band on a signed-off revision", async () => {
     const signOff = {
       signedByName: "Idris Lund",
