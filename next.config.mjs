@@ -18,7 +18,6 @@ const contentSecurityPolicy = [
 ].join("; ");
 
 const securityHeaders = [
-  { key: "Content-Security-Policy", value: contentSecurityPolicy },
   // Link secrets (reset, invitation, shared table) sit in addresses: no other site sees them as a referrer.
   { key: "Referrer-Policy", value: "same-origin" },
   { key: "X-Content-Type-Options", value: "nosniff" },
@@ -35,7 +34,11 @@ const nextConfig = {
   poweredByHeader: false,
   typedRoutes: false,
   async headers() {
-    return [{ source: "/:path*", headers: securityHeaders }];
+    return [
+      { source: "/:path*", headers: securityHeaders },
+      // An uploaded file is served with its own policy (sandbox), so that it never runs as one of our pages.
+      { source: "/((?!api/uploads/).*)", headers: [{ key: "Content-Security-Policy", value: contentSecurityPolicy }] },
+    ];
   },
 };
 

@@ -100,6 +100,8 @@ export async function insertSlipTest(crewId: string, test: NewSlipTest): Promise
 /** Publishes a new read-only link to the crew's slip table by its token's hash, revoking any earlier link. */
 export async function publishSlipTable(crewId: string, userId: string, tokenHash: string): Promise<void> {
   await db.transaction(async (trx) => {
+    // The crew's row is locked first, so that parallel publishing takes turns and leaves one live link.
+    await trx("crews").where({ id: crewId }).forUpdate().first("id");
     await trx("slip_table_links").where({ crew_id: crewId }).whereNull("revoked_at").update({ revoked_at: trx.fn.now() });
     await trx("slip_table_links").insert({ crew_id: crewId, token_sha256: tokenHash, created_by: userId });
   });

@@ -4,10 +4,10 @@ import type { UploadPurpose } from "@/lib/uploads";
 
 // Uploaded files' metadata; the bytes are in S3 under storage_key.
 
+/** An upload as pages and answers show it: never its storage key, which names the bytes in the bucket. */
 export interface UploadRow {
   id: string;
   purpose: UploadPurpose;
-  storageKey: string;
   fileName: string;
   contentType: string;
   byteSize: number;
@@ -17,10 +17,13 @@ export interface UploadRow {
   createdAt: string;
 }
 
+/** An upload with the key of its bytes in S3, for the server alone (download and removal). */
+export type StoredUpload = UploadRow & { storageKey: string };
+
 /** What a photo or manual belongs to. */
 export type UploadOwner = { itemId: string } | { modelId: string } | { siteId: string };
 
-export type NewUpload = Omit<UploadRow, "id" | "createdAt" | "modelId" | "itemId"> & {
+export type NewUpload = Omit<StoredUpload, "id" | "createdAt" | "modelId" | "itemId"> & {
   modelId?: string | null;
   itemId?: string | null;
   siteId?: string | null;
@@ -31,7 +34,6 @@ export type NewUpload = Omit<UploadRow, "id" | "createdAt" | "modelId" | "itemId
 const columns = [
   "id",
   "purpose",
-  db.raw('storage_key as "storageKey"'),
   db.raw('file_name as "fileName"'),
   db.raw('content_type as "contentType"'),
   db.raw('byte_size::float8 as "byteSize"'),
@@ -58,11 +60,15 @@ export async function insertUpload(crewId: string, upload: NewUpload): Promise<U
       uploaded_by: upload.uploadedBy,
     })
     .returning("id");
-  return (await findUpload(crewId, id))!;
+  return (await db("uploads").where({ crew_id: crewId, id }).first(columns))!;
 }
 
-export async function findUpload(crewId: string, id: string): Promise<UploadRow | null> {
-  return (await db("uploads").where({ crew_id: crewId, id }).first(columns)) ?? null;
+export async function findUpload(crewId: string, id: string): Promise<StoredUpload | null> {
+  return (
+    (await db("uploads")
+      .where({ crew_id: crewId, id })
+      .first([...columns, db.raw('storage_key as "storageKey"')])) ?? null
+  );
 }
 
 /** A trace's stored analysis (what the engine detected and the points the chart draws). */
@@ -83,7 +89,7 @@ export function listUploads(crewId: string, of: UploadOwner): Promise<UploadRow[
  * Removes a photo's or a manual's record and answers it, so its bytes can go from storage next. A trace is
  * kept: it is the evidence of a slip test, removed only with its crew.
  */
-export async function deleteUpload(crewId: string, id: string): Promise<UploadRow | null | "trace"> {
+export async function deleteUpload(crewId: string, id: string): Promise<StoredUpload | null | "trace"> {
   const upload = await findUpload(crewId, id);
   if (!upload) return null;
   if (upload.purpose === "trace") return "trace";

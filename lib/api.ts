@@ -10,18 +10,27 @@ import { allowedSentence, rigInputProblem } from "./planner/problems";
 
 const MUTATING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 
-/** Mutating requests must come from our own pages: the Origin header names this host. */
+/** The origins this site answers as: APP_ORIGIN where set (the public address), and this request's own scheme and Host. */
+function siteOrigins(request: Request): string[] {
+  const host = request.headers.get("host");
+  const own = host ? [`${new URL(request.url).protocol}//${host}`] : [];
+  return process.env.APP_ORIGIN ? [new URL(process.env.APP_ORIGIN).origin, ...own] : own;
+}
+
+/**
+ * Mutating requests must come from our own pages: the Origin header names this site, scheme, host and port
+ * alike. X-Forwarded-Host is not believed, since any client can send it.
+ */
 export function assertSameOrigin(request: Request): void {
   if (!MUTATING.has(request.method)) return;
   const origin = request.headers.get("origin");
-  const host = request.headers.get("x-forwarded-host") ?? request.headers.get("host");
-  let originHost: string | null = null;
+  let given: string | null = null;
   try {
-    originHost = origin ? new URL(origin).host : null;
+    given = origin ? new URL(origin).origin : null;
   } catch {
-    originHost = null;
+    given = null;
   }
-  if (!originHost || originHost !== host) {
+  if (!given || !siteOrigins(request).includes(given)) {
     throw new AccessError(403, "This request did not come from a Spanwright page (its Origin header is missing or names another site).");
   }
 }

@@ -1,6 +1,7 @@
 import type { SlipResult } from "@/physics";
 import { capacityDigits, forceUnitOf, ropeDiameterDigits } from "./figures";
 import type { UnitSystem } from "./rig-form/quantities";
+import { csvText } from "./csv";
 
 // The slip table: for each device and rope diameter, what the crew's bench has shown. A held-to result
 // is a lower bound and never counts as a slip load.
@@ -80,12 +81,11 @@ export function slipTableCsv(table: SlipTable, units: UnitSystem): string {
   const names = new Map(table.devices.map((d) => [d.id, d.name]));
   const force = (n: number | null) => (n === null ? "" : capacityDigits(n, units));
   const unit = forceUnitOf(units);
-  const quote = (text: string) => `"${text.replace(/"/g, '""')}"`;
   const rows = [...table.cells]
     .sort((a, b) => names.get(a.deviceId)!.localeCompare(names.get(b.deviceId)!) || a.ropeDiameterMm - b.ropeDiameterMm)
     .map((c) =>
       [
-        quote(names.get(c.deviceId)!),
+        csvText(names.get(c.deviceId)!),
         ropeDiameterDigits(c.ropeDiameterMm),
         c.tests,
         c.slips,

@@ -11,12 +11,18 @@ let server: AppServer | null = null;
 let stopping = false;
 
 // Ctrl-C reaches this process more than once (from the terminal and again from npm and tsx, which pass it on):
-// only the first starts the shutdown, and the process exits once everything it started has stopped.
+// only the first starts the shutdown, and the process exits once everything it started has stopped. Each
+// step runs whatever the one before did; the database stops last, and from the exit handler if need be.
 async function shutdown(code: number): Promise<void> {
   if (stopping) return;
   stopping = true;
-  await server?.stop();
-  await stack?.stop();
+  try {
+    await server?.stop();
+  } catch (error) {
+    console.error("spanwright: the web server did not stop cleanly:", error);
+  } finally {
+    await stack?.stop();
+  }
   console.log("spanwright: stopped.");
   process.exit(code);
 }

@@ -106,8 +106,11 @@ async function main(): Promise<number> {
 }
 
 async function shutdown() {
-  await server?.stop();
-  await stack?.stop();
+  try {
+    await server?.stop();
+  } finally {
+    await stack?.stop();
+  }
 }
 
 process.on("SIGINT", () => void shutdown().then(() => process.exit(130)));

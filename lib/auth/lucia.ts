@@ -8,7 +8,8 @@ const secure = process.env.COOKIE_SECURE ? process.env.COOKIE_SECURE === "true" 
 
 export const lucia = new Lucia(new NodePostgresAdapter(pgPool, { user: "users", session: "sessions" }), {
   sessionExpiresIn: new TimeSpan(30, "d"),
-  sessionCookie: { name: SESSION_COOKIE, expires: false, attributes: { secure, sameSite: "lax" } },
+  // The cookie ends with the session (30 days, renewed with it), not at the browser's 400-day ceiling.
+  sessionCookie: { name: SESSION_COOKIE, expires: true, attributes: { secure, sameSite: "lax" } },
   getUserAttributes: (attributes) => ({ email: attributes.email, name: attributes.name }),
 });
 

@@ -111,12 +111,29 @@ function runningPort(dataDir: string): number | null {
   return Number.isFinite(port) ? port : null;
 }
 
-/** Creates (once) and starts the project's cluster on 127.0.0.1:port. */
-export async function startCluster(projectDir: string, profile: Profile, port: number): Promise<PostgresCluster> {
+/** Stops the server of a data folder: a fast shutdown (clients cut off, work saved), else an immediate one. True once it is down. */
+function stopServer(bin: string, dataDir: string): boolean {
+  const pgCtl = path.join(bin, "pg_ctl");
+  if (asServerUser(pgCtl, ["stop", "-D", dataDir, "-m", "fast", "-w", "-t", "20"]).status === 0) return true;
+  asServerUser(pgCtl, ["stop", "-D", dataDir, "-m", "immediate", "-w", "-t", "10"]);
+  return !isRunning(bin, dataDir);
+}
+
+/**
+ * Creates (once) and starts the project's cluster on 127.0.0.1:port. With `leftOver` "stop" (the stack, which
+ * has checked that no other run of this checkout holds its ports), a cluster still running from an earlier run
+ * that did not stop it is stopped first, then started afresh; otherwise a running cluster is shared.
+ */
+export async function startCluster(projectDir: string, profile: Profile, port: number, leftOver: "share" | "stop" = "share"): Promise<PostgresCluster> {
   const bin = await ensurePostgresBinaries();
   const dataDir = clusterDir(projectDir, profile);
   initCluster(bin, dataDir);
   const cluster = { dataDir, port, user: SUPERUSER, password: SUPERUSER_PASSWORD, startedHere: false };
+  if (leftOver === "stop" && isRunning(bin, dataDir)) {
+    console.log(`spanwright: stopping the ${profile} database an earlier run left running (${dataDir}).`);
+    if (!stopServer(bin, dataDir))
+      throw new StackError(`The ${profile} database left running in ${dataDir} does not stop: stop it with \`pg_ctl stop -D ${dataDir}\`.`);
+  }
   if (isRunning(bin, dataDir)) {
     const current = runningPort(dataDir);
     if (current !== port) {
@@ -147,10 +164,12 @@ export async function startCluster(projectDir: string, profile: Profile, port: n
   return { ...cluster, startedHere: true };
 }
 
+/** Stops the cluster if this run started it; synchronous, so it also runs from a process's exit handler. Safe to call twice. */
 export function stopCluster(cluster: PostgresCluster): void {
   if (!cluster.startedHere) return;
+  cluster.startedHere = false;
   const bin = findBinDir();
-  if (bin) asServerUser(path.join(bin, "pg_ctl"), ["stop", "-D", cluster.dataDir, "-m", "fast", "-w"]);
+  if (bin && !stopServer(bin, cluster.dataDir)) console.error(`spanwright: PostgreSQL in ${cluster.dataDir} did not stop; the next start stops it.`);
 }
 
 export function databaseUrl(cluster: PostgresCluster, database: string): string {

@@ -52,6 +52,7 @@ export interface RunningStack {
 }
 
 const BUCKET = "spanwright-uploads";
+const wait = (ms: number) => new Promise<void>((resolve) => setTimeout(resolve, ms).unref());
 
 /**
  * Starts PostgreSQL, the S3 fake and the SMTP fake, migrates and seeds. On any failure, stops
@@ -66,14 +67,22 @@ export async function startStack(profile: Profile): Promise<RunningStack> {
   let cluster: PostgresCluster | null = null;
   let s3: S3Fake | null = null;
   let smtp: SmtpFake | null = null;
+  // The fakes get a few seconds to close (connections kept alive under load could hold them open for good);
+  // the database is stopped whatever they do, and again from the exit handler should the process end first.
   const stop = async () => {
-    await smtp?.close().catch(() => undefined);
-    await s3?.close().catch(() => undefined);
-    if (cluster) stopCluster(cluster);
+    try {
+      await Promise.all([smtp?.close(), s3?.close()].map((closing) => Promise.race([closing?.catch(() => undefined), wait(3000)])));
+    } finally {
+      if (cluster) stopCluster(cluster);
+    }
   };
+  process.once("exit", () => {
+    if (cluster) stopCluster(cluster);
+  });
 
   try {
-    cluster = await startCluster(projectDir, profile, settings.pgPort);
+    // The ports above are free, so no other run of this checkout is up: a cluster still running was left behind.
+    cluster = await startCluster(projectDir, profile, settings.pgPort, "stop");
     await ensureDatabase(cluster, settings.database, profile === "test");
     const url = databaseUrl(cluster, settings.database);
     const mailDir = path.join(settings.dataDir, "mail");

@@ -49,8 +49,11 @@ describe("photos and manuals", () => {
       itemId,
       sha256: crypto.createHash("sha256").update(PNG).digest("hex"),
     });
-    expect(upload.storageKey).toMatch(/^uploads\/[0-9a-f]{48}$/);
-    expect(upload.storageKey).not.toContain(crew.id);
+    // The key of the bytes stays on the server: random, naming neither the crew nor the file.
+    expect(upload).not.toHaveProperty("storageKey");
+    const { storage_key: storageKey } = await testDb("uploads").where({ id: upload.id }).first("storage_key");
+    expect(storageKey).toMatch(/^uploads\/[0-9a-f]{48}$/);
+    expect(storageKey).not.toContain(crew.id);
     const served = await as.member.get(`/api/uploads/${upload.id}`);
     expect(served.status).toBe(200);
     expect(served.headers.get("content-type")).toBe("image/png");

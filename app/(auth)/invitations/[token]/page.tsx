@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { notFound } from "next/navigation";
 import { invitationByTokenHash } from "@/db/invitations";
 import { getCurrentSession } from "@/lib/auth/session";
 import { hashToken } from "@/lib/tokens";
@@ -16,6 +17,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
   const here = `/invitations/${token}`;
 
   const problem = invitationProblem(invitation);
+  // A link Spanwright never sent names nothing: a real 404 (not-found.tsx beside this page says what to do).
+  if (problem === "unknown") notFound();
   if (problem || !invitation) {
     return (
       <>
