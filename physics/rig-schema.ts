@@ -78,7 +78,8 @@ export const RigInputSchema = z.object({
       massPerMetreKg: positive("a mass per metre > 0 kg/m"),
       mbsN: positive("a minimum breaking strength > 0 N"),
       ridesAlong: z.boolean({ error: "true or false" }),
-      stretchPoints: stretchPoints.optional(),
+      // An empty list is no curve (the form's table for a backup left empty).
+      stretchPoints: z.preprocess((v) => (Array.isArray(v) && v.length === 0 ? undefined : v), stretchPoints.optional()),
       slackM: number("a slack from 0 m to 100 m (the backup's length over the mainline's)")
         .gte(0, "a slack from 0 m to 100 m (the backup's length over the mainline's)")
         .lte(100, "a slack from 0 m to 100 m (the backup's length over the mainline's)")

@@ -16,6 +16,8 @@ const MUTED = "#4d5d71";
 const LOADED = "#11573d";
 const ANCHOR = "#5c3d00";
 const GROUND = "#cbd3dc";
+const FALL = "#5c3d00";
+const CATCH = "#8f1d14";
 
 /** The walker may be dragged between 1 % and 99 % of the span: at an anchor the line cannot deflect. */
 export const WALKER_RANGE = { min: 0.01, max: 0.99 } as const;
@@ -63,6 +65,17 @@ function groundProfile(ground: { points: { xM: number; heightM: number }[] } | u
   return [{ x: 0, y: points[0].y }, ...points, { x: span, y: points[points.length - 1].y }];
 }
 
+/** Height of a drawn profile at x, read off its points. */
+function heightOf(profile: { x: number; y: number }[], x: number): number {
+  const i = Math.max(
+    1,
+    profile.findIndex((p) => p.x >= x),
+  );
+  const a = profile[i - 1];
+  const b = profile[i] ?? a;
+  return b.x === a.x ? a.y : a.y + ((b.y - a.y) * (x - a.x)) / (b.x - a.x);
+}
+
 interface LineDiagramProps {
   result: RigResult;
   /** The engine's input as evaluated, for the ground under the line. */
@@ -83,7 +96,15 @@ export function LineDiagram({ result, input, units, onWalkerMove }: LineDiagramP
   const end = unloaded.profile[unloaded.profile.length - 1];
   const span = end.x;
   const ground = groundProfile(input.ground as Parameters<typeof groundProfile>[0], span);
-  const all = [...unloaded.profile, ...walker.profile, ...ground];
+  // The walker's lowest point after a leash fall and after the backup's catch, hanging below where each fall began.
+  // Each is drawn as a drop from the unloaded line where the fall began.
+  const lowest = [
+    { label: "Leash fall", positionM: result.leashFall.positionM, y: result.leashFall.lowestPointM, colour: FALL },
+    { label: "Backup catch", positionM: result.backupCatch?.positionM ?? 0, y: result.backupCatch?.lowestPointM ?? null, colour: CATCH },
+  ]
+    .filter((m): m is { label: string; positionM: number; y: number; colour: string } => m.y !== null)
+    .map((m) => ({ ...m, lineY: heightOf(unloaded.profile, m.positionM) }));
+  const all = [...unloaded.profile, ...walker.profile, ...ground, ...lowest.map((m) => ({ x: m.positionM, y: m.y }))];
   const top = Math.max(...all.map((p) => p.y), 0);
   const bottom = Math.min(...all.map((p) => p.y), 0);
   const pixelsPerMetre = Math.max(width - PAD.left - PAD.right, 1) / span;
@@ -119,7 +140,9 @@ export function LineDiagram({ result, input, units, onWalkerMove }: LineDiagramP
   )}; with the walker at ${formatDistance(walker.positionM, units)} the sag is ${formatDepth(walker.sagAtWalkerM, units)}, tension at A ${formatLoad(
     walker.tensionAN,
     units,
-  )} and at B ${formatLoad(walker.tensionBN, units)}. Heights drawn ×${exaggeration}.`;
+  )} and at B ${formatLoad(walker.tensionBN, units)}.${lowest
+    .map((m) => ` ${m.label} at ${formatDistance(m.positionM, units)}: the walker's lowest point at ${formatDistance(m.y, units)} relative to A.`)
+    .join("")} Heights drawn ×${exaggeration}.`;
   return (
     <figure>
       <div
@@ -167,8 +190,25 @@ export function LineDiagram({ result, input, units, onWalkerMove }: LineDiagramP
               <Line points={[px(0), py(0), px(end.x), py(end.y)]} stroke={MUTED} strokeWidth={1} dash={[2, 6]} />
               <Line points={points(unloaded.profile)} stroke={MUTED} strokeWidth={2} dash={[10, 6]} />
               <Line points={points(walker.profile)} stroke={LOADED} strokeWidth={3} />
+              {lowest.map((m, i) => (
+                <Group key={m.label}>
+                  <Line points={[px(m.positionM), py(m.lineY), px(m.positionM), py(m.y)]} stroke={m.colour} strokeWidth={1} dash={[3, 4]} />
+                  <Line points={[px(m.positionM) - 9, py(m.y), px(m.positionM) + 9, py(m.y)]} stroke={m.colour} strokeWidth={3} />
+                  <Line points={[px(m.positionM), py(m.y) - 9, px(m.positionM), py(m.y) + 9]} stroke={m.colour} strokeWidth={3} />
+                  <Text
+                    x={px(m.positionM) + (i === 0 ? -172 : 12)}
+                    y={py(m.y) - 7}
+                    width={160}
+                    align={i === 0 ? "right" : "left"}
+                    text={`${m.label}: lowest point`}
+                    fontSize={13}
+                    fontStyle="bold"
+                    fill={m.colour}
+                  />
+                </Group>
+              ))}
               <Circle x={px(walker.positionM)} y={py(walkerY)} radius={11} fill={LOADED} stroke="#ffffff" strokeWidth={3} />
-              <Text x={px(walker.positionM) - 40} y={py(walkerY) + 16} width={80} align="center" text="Walker" fontSize={14} fontStyle="bold" fill={LOADED} />
+              <Text x={px(walker.positionM) - 40} y={py(walkerY) - 32} width={80} align="center" text="Walker" fontSize={14} fontStyle="bold" fill={LOADED} />
               {[
                 { x: 0, y: 0, label: "A", tension: walker.tensionAN, align: "left" as const },
                 { x: end.x, y: end.y, label: "B", tension: walker.tensionBN, align: "right" as const },
@@ -203,6 +243,11 @@ export function LineDiagram({ result, input, units, onWalkerMove }: LineDiagramP
           With the walker (solid)
         </span>
         {ground.length ? <span>Shaded: the ground under the line.</span> : null}
+        {lowest.map((m) => (
+          <span key={m.label} style={{ color: m.colour }} className="font-semibold">
+            + {m.label}: the walker&apos;s lowest point
+          </span>
+        ))}
         <span>Figures at A and B: the tension with the walker where it is. Drag the walker, or focus the view and use the arrow and Page keys.</span>
       </figcaption>
     </figure>

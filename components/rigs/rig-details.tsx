@@ -1,9 +1,9 @@
 "use client";
 
 import { memo, type ReactNode } from "react";
-import { formatCapacity, formatDepth, formatDistance, formatLoad, truncateRatio } from "@/lib/rig-form/format";
+import { formatCapacity, formatClearance, formatDepth, formatDistance, formatLoad, truncateRatio } from "@/lib/rig-form/format";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
-import type { RigResult, SafetyFactor } from "@/physics";
+import type { CatchResult, RigResult, SafetyFactor, WorstClearance } from "@/physics";
 import { Table } from "@/components/ui/table";
 import { SweepChart } from "./sweep-chart";
 import { Verdict } from "./verdict";
@@ -57,6 +57,89 @@ function SafetyFactorTable({ factors, units }: { factors: SafetyFactor[]; units:
   );
 }
 
+/** Where the walker's lowest point ends up after a fall, relative to anchor A, and how far that is above the ground. */
+function lowestRows(fall: CatchResult, units: UnitSystem): [string, ReactNode][] {
+  return [
+    ["Walker's lowest point, relative to A", fall.lowestPointM === null ? "no leash length given" : formatDistance(fall.lowestPointM, units)],
+    ["Clearance above the ground there", fall.groundClearanceM === null ? "no ground given" : formatClearance(fall.groundClearanceM, units)],
+  ];
+}
+
+function BackupCatchPanel({ result, units }: { result: RigResult; units: UnitSystem }) {
+  const c = result.backupCatch;
+  return (
+    <Panel title="Backup catch: the mainline fails, upper bound" id="backup-catch-figures">
+      {c ? (
+        <>
+          <p className="text-sm text-ink-700">{c.note}</p>
+          <Figures
+            rows={[
+              [`Peak load on the backup at ${formatDistance(c.positionM, units)} (upper bound)`, formatLoad(c.peakLoadN, units)],
+              ["Backup tension at A (upper bound)", formatLoad(c.peakTensionAN, units)],
+              ["Backup tension at B (upper bound)", formatLoad(c.peakTensionBN, units)],
+              ["Free fall onto the backup", formatDepth(c.fallHeightM, units)],
+              ["Backup deflection at the catch", formatDepth(c.deflectionM, units)],
+              ...lowestRows(c, units),
+            ]}
+          />
+        </>
+      ) : (
+        <p className="text-ink-800">{result.backupCatchMissing}</p>
+      )}
+    </Panel>
+  );
+}
+
+function WorstClearanceFigure({ worst, minimum, units }: { worst: WorstClearance | null; minimum: number; units: UnitSystem }) {
+  if (!worst) return <>not worked out</>;
+  return (
+    <>
+      <Verdict tone={worst.passes ? "ok" : "danger"}>{formatClearance(worst.clearanceM, units)}</Verdict>
+      <span className="block text-sm font-normal text-ink-700">
+        at {formatDistance(worst.positionM, units)} from A; {worst.passes ? "meets" : "below"} the crew&apos;s {formatClearance(minimum, units)}
+      </span>
+    </>
+  );
+}
+
+function ClearancePanel({ result, units }: { result: RigResult; units: UnitSystem }) {
+  const { clearance } = result;
+  const rule = clearance.ruleOfThumb;
+  return (
+    <Panel title="Ground clearance after a fall" id="clearance-figures">
+      <p className="text-sm text-ink-700">{clearance.note}</p>
+      {clearance.groundGiven ? (
+        <Figures
+          rows={[
+            [
+              "Lowest clearance, leash fall anywhere on the span",
+              <WorstClearanceFigure key="leash" worst={clearance.leashFall} minimum={clearance.minimumM} units={units} />,
+            ],
+            [
+              "Lowest clearance, backup catch anywhere on the span",
+              clearance.backupCatch || result.backupCatch ? (
+                <WorstClearanceFigure key="backup" worst={clearance.backupCatch} minimum={clearance.minimumM} units={units} />
+              ) : (
+                <span className="text-base font-normal">{result.backupCatchMissing}</span>
+              ),
+            ],
+            ["Crew minimum clearance", formatClearance(clearance.minimumM, units)],
+            [
+              "This line at mid-span, above the ground (unloaded)",
+              rule.midSpanHeightAboveGroundM === null ? "–" : formatClearance(rule.midSpanHeightAboveGroundM, units),
+            ],
+          ]}
+        />
+      ) : null}
+      <p className="text-ink-800">
+        <span className="font-semibold">Rule of thumb:</span> rig a highline at least a third of its length plus {formatDistance(3, units)} above the ground,
+        here {formatDepth(rule.heightAboveGroundM, units)}, or a fall held only by the backup may reach it.{" "}
+        <span className="text-sm text-ink-600">Source: {rule.source}.</span>
+      </p>
+    </Panel>
+  );
+}
+
 function RigFigures({ result, units }: { result: RigResult; units: UnitSystem }) {
   const { walker, unloaded, leashFall, tensioning, brake, anchors } = result;
   const brakeVerdict = BRAKE_VERDICTS[brake.verdict];
@@ -93,9 +176,12 @@ function RigFigures({ result, units }: { result: RigResult; units: UnitSystem })
             ["Peak anchor load (upper bound)", formatLoad(leashFall.peakAnchorLoadN, units)],
             ["Free fall before the line takes the load", formatDepth(leashFall.fallHeightM, units)],
             ["Line deflection at the catch", formatDepth(leashFall.deflectionM, units)],
+            ...lowestRows(leashFall, units),
           ]}
         />
       </Panel>
+      <BackupCatchPanel result={result} units={units} />
+      <ClearancePanel result={result} units={units} />
       <Panel title="Tensioning" id="tensioning-figures">
         <Figures
           rows={[
@@ -115,6 +201,7 @@ function RigFigures({ result, units }: { result: RigResult; units: UnitSystem })
           rows={[
             ["Force at the brake at peak tension", formatLoad(brake.brakeForce, units)],
             ["Margin (lowest slip ÷ force at the brake)", brake.margin === null ? "no slip results" : `${atLeast}${truncateRatio(brake.margin)}`],
+            ["Crew minimum margin", String(brake.minimumMargin)],
             [
               "Highest line tension the brake holds",
               brake.highestLineTensionHeld === null ? "unknown: untested" : `${atLeast}${formatCapacity(brake.highestLineTensionHeld, units)}`,
@@ -123,7 +210,7 @@ function RigFigures({ result, units }: { result: RigResult; units: UnitSystem })
           ]}
         />
       </Panel>
-      <Panel title="Anchors (peak loads: walker anywhere or leash fall)" id="anchor-figures">
+      <Panel title="Anchors (peak loads: walker anywhere, leash fall or backup catch)" id="anchor-figures">
         <Figures rows={anchorRows} />
       </Panel>
     </>

@@ -1,4 +1,4 @@
-import { formatDepth, formatDistance, formatLoad, truncateRatio } from "@/lib/rig-form/format";
+import { formatClearance, formatDepth, formatDistance, formatLoad, truncateRatio } from "@/lib/rig-form/format";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { RigResult, SafetyFactor } from "@/physics";
 import { classNames } from "@/lib/class-names";
@@ -17,7 +17,25 @@ interface Headline {
   tone?: "ok" | "danger" | "caution";
 }
 
-/** The figures that answer "will it hold", in the order a rigger asks them. */
+/** The lower of the two worst clearances over the span (leash fall, backup catch), named by the fall that gives it. */
+export function lowestClearanceOf(result: RigResult): { what: string; clearanceM: number; positionM: number; passes: boolean } | null {
+  const { leashFall, backupCatch } = result.clearance;
+  const falls = [...(leashFall ? [{ what: "leash fall", ...leashFall }] : []), ...(backupCatch ? [{ what: "backup catch", ...backupCatch }] : [])];
+  return falls.reduce<(typeof falls)[number] | null>((low, f) => (low === null || f.clearanceM < low.clearanceM ? f : low), null);
+}
+
+function clearanceHeadline(result: RigResult, units: UnitSystem): Headline {
+  const label = "Lowest clearance after a fall";
+  const lowest = lowestClearanceOf(result);
+  if (!lowest) return { label, value: result.clearance.groundGiven ? "no leash length" : "no ground given" };
+  return {
+    label,
+    value: `${formatClearance(lowest.clearanceM, units)} (min ${formatClearance(result.clearance.minimumM, units)}), ${lowest.what} at ${formatDistance(lowest.positionM, units)}`,
+    tone: lowest.passes ? "ok" : "danger",
+  };
+}
+
+/** The figures that answer "will it hold" and "will a fall reach the ground", in the order a rigger asks them. */
 function headlines(result: RigResult, units: UnitSystem): Headline[] {
   const { sweep, leashFall, brake, safetyFactors, walker } = result;
   const worstWalking = Math.max(sweep.worstTensionA.tensionA, sweep.worstTensionB.tensionB);
@@ -32,6 +50,7 @@ function headlines(result: RigResult, units: UnitSystem): Headline[] {
     },
     { label: `Walker at ${formatDistance(walker.positionM, units)}: sag`, value: formatDepth(walker.sagAtWalkerM, units) },
     { label: "Leash-fall peak at an anchor (upper bound)", value: formatLoad(leashFall.peakAnchorLoadN, units) },
+    clearanceHeadline(result, units),
     lowest
       ? { label: "Lowest safety factor", value: `${lowest.shown} (min ${lowest.minimum}), ${lowest.name}`, tone: lowest.passes ? "ok" : "danger" }
       : { label: "Lowest safety factor", value: "no components" },
@@ -65,13 +84,13 @@ export function RigSummary({ evaluation, units, variant }: { evaluation: Evaluat
   const rows = headlines(evaluation.result, units);
   const warnings = evaluation.result.warnings.length + evaluation.gearProblems.length;
   if (variant === "strip") {
-    const [worst, sag, , , fall, lowest, brake] = rows;
+    const [worst, sag, , , fall, clearance, lowest, brake] = rows;
     return (
       <dl
         aria-label="Headline figures"
         className="grid grid-cols-2 gap-x-3 gap-y-1 rounded-b-panel border-b-2 border-ink-300 bg-white px-3 py-2 text-sm shadow-panel"
       >
-        {[worst, sag, fall, lowest, brake].map((h) => (
+        {[worst, sag, fall, clearance, lowest, brake].map((h) => (
           <div key={h.label} className="min-w-0">
             <dt className="truncate text-xs text-ink-600">{h.label}</dt>
             <dd className={classNames("truncate font-semibold tabular-nums", h.tone === "danger" ? "text-danger-700" : "text-ink-900")}>{h.value}</dd>

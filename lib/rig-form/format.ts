@@ -47,3 +47,6 @@ export function formatDistance(metres: number, units: UnitSystem): string {
   const unit = unitLabel("length", units);
   return `${toShown(metres, "length", units).toFixed(DECIMALS[unit])} ${unit}`;
 }
+
+/** A clearance above the ground (m) for display, rounded down: never shown roomier than computed. */
+export const formatClearance = (metres: number, units: UnitSystem) => formatQuantity(metres, "length", units, "down");

@@ -90,3 +90,26 @@ test("the Rigs page leads to the line check", async ({ page }) => {
   await expect(page).toHaveURL(/\/rigs\/check$/);
   await expect(figure(page, "Tension at anchor A")).toBeVisible();
 });
+
+test("the line check shows the clearance after a fall once a site gives the ground, with the rule of thumb and its source beside it", async ({ page }) => {
+  test.setTimeout(120_000);
+  await signInAs(page, "rigger", "/rigs/check");
+  const headline = page.getByRole("region", { name: "Headline figures" });
+  const clearance = page.getByRole("region", { name: "Ground clearance after a fall" });
+  await expect(headline.locator('dt:text-is("Lowest clearance after a fall") + dd')).toHaveText("no ground given");
+  await expect(clearance).toContainText("No ground was given");
+
+  // The demo gorge (invented, seeds/03) gives its ground: the lowest clearance over the span, against the crew's 2 m minimum.
+  await page.getByLabel("Site", { exact: true }).selectOption({ label: "Corvid Gorge, east notch" });
+  await expect(headline.locator('dt:text-is("Lowest clearance after a fall") + dd')).toHaveText(
+    /^✓?\s*-?\d+\.\d\d m \(min 2\.00 m\), leash fall at \d+\.\d\d m$/,
+  );
+  await expect(figure(page, "Clearance above the ground there").first()).toHaveText(/^-?\d+\.\d\d m$/);
+  await expect(figure(page, "Crew minimum clearance")).toHaveText("2.00 m");
+  // The rule of thumb for the gorge's 84 m span, worked by hand: 84 / 3 + 3 = 31 m (Swiss Slackline Association, 2014).
+  await expect(clearance).toContainText("here 31.00 m");
+  await expect(clearance).toContainText("Source: Swiss Slackline Association");
+  // The walker's lowest point is drawn on the side view, and described to a screen reader.
+  await expect(page.getByText("+ Leash fall: the walker's lowest point")).toBeVisible();
+  await expect(page.getByRole("slider", { name: "Walker position on the side view" })).toHaveAttribute("aria-valuetext", /Leash fall at .*lowest point at/);
+});

@@ -154,3 +154,11 @@ describe("the backup's static states against the independent many-node model (40
     });
   }
 });
+
+describe("a backup with an empty list of stretch points", () => {
+  it("has no curve: its catch is not worked out, and it is not an error", () => {
+    const result = evaluateRig({ ...withGround, backup: { ...withGround.backup, stretchPoints: [] } });
+    expect(result.backupCatch).toBeNull();
+    expect(result.backupCatchMissing).toMatch(/No stretch points/);
+  });
+});
