@@ -1,11 +1,17 @@
-import { afterEach, describe, expect, it } from "vitest";
+import { afterAll, beforeEach, describe, expect, it } from "vitest";
 import { clientAddress } from "@/lib/client-address";
 
 // The rightmost-untrusted reading of X-Forwarded-For (RFC 7239 §5.2 describes the same chain of proxies, from memory).
 const from = (forwardedFor: string) => new Request("http://x/", { headers: { "x-forwarded-for": forwardedFor } });
 
-afterEach(() => {
+// The test stack trusts its own loopback proxy (TRUSTED_PROXIES=127.0.0.1): each case here sets its own.
+const inherited = process.env.TRUSTED_PROXIES;
+beforeEach(() => {
   delete process.env.TRUSTED_PROXIES;
+});
+afterAll(() => {
+  if (inherited === undefined) delete process.env.TRUSTED_PROXIES;
+  else process.env.TRUSTED_PROXIES = inherited;
 });
 
 describe("clientAddress", () => {
