@@ -12,6 +12,8 @@ export default defineConfig({
     baseURL: process.env.E2E_BASE_URL || "http://127.0.0.1:3100",
     trace: "off",
     screenshot: "only-on-failure",
+    // Each test starts from a browser with nothing kept; the offline spec lets the service worker in.
+    serviceWorkers: "block",
     launchOptions: {
       executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium",
       args: [

@@ -2,6 +2,7 @@ import type { Metadata, Viewport } from "next";
 import "@fontsource-variable/inter";
 import "./globals.css";
 import { ToastProvider } from "@/components/ui/toast";
+import { OfflineSupport } from "@/components/offline/service-worker";
 
 export const metadata: Metadata = {
   title: { default: "Spanwright", template: "%s · Spanwright" },
@@ -15,7 +16,9 @@ export default function RootLayout({ children }: { children: React.ReactNode }) 
   return (
     <html lang="en">
       <body>
-        <ToastProvider>{children}</ToastProvider>
+        <OfflineSupport>
+          <ToastProvider>{children}</ToastProvider>
+        </OfflineSupport>
       </body>
     </html>
   );

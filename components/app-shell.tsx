@@ -1,6 +1,7 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { AppNav } from "./app-nav";
+import { ConnectionStatus } from "./offline/connection-status";
 
 interface AppShellProps {
   crewSwitcher?: ReactNode;
@@ -23,6 +24,9 @@ export function AppShell({ crewSwitcher, accountMenu, children }: AppShellProps)
           {accountMenu}
         </div>
         {crewSwitcher ? <div className="px-4 pb-3">{crewSwitcher}</div> : null}
+        <div className="px-4 pb-3">
+          <ConnectionStatus />
+        </div>
         <div className="px-2 pb-2 md:px-3">
           <AppNav />
         </div>

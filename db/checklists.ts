@@ -3,7 +3,7 @@ import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { db } from "./knex";
 import { recordStep, type Actor } from "./audit-log";
-import { insertOnce } from "./idempotent";
+import { insertOnce, landedBefore } from "./idempotent";
 
 // The crew's on-site checklist and its runs on signed-off revisions. A run keeps the items as they
 // read when it started; each tick is kept with who made it and when, and an item reads its latest tick.
@@ -68,6 +68,8 @@ export function startRun(crewId: string, rigId: string, revisionId: string, acto
   return db.transaction(async (trx) => {
     const revision = await lockedRevisionState(trx, crewId, rigId, revisionId);
     if (!revision) return { outcome: "not_found" };
+    const earlier = await landedBefore<{ id: string }>(trx, "checklist_runs", crewId, idempotencyKey);
+    if (earlier) return { outcome: "done", value: earlier.id, replayed: true };
     const refusal = onSiteRefusal(revision, "run the checklist");
     if (refusal) return { outcome: "refused", message: refusal };
     const template = await trx("checklist_templates").where({ crew_id: crewId }).first("items");
@@ -98,6 +100,7 @@ export function tickItem(
     const revision = await lockedRevisionState(trx, crewId, rigId, revisionId);
     const run = revision && (await trx("checklist_runs").where({ crew_id: crewId, id: runId, revision_id: revisionId }).first("items"));
     if (!revision || !run) return { outcome: "not_found" };
+    if (await landedBefore(trx, "checklist_ticks", crewId, tick.idempotencyKey)) return { outcome: "done", value: null, replayed: true };
     const refusal = onSiteRefusal(revision, "tick the checklist");
     if (refusal) return { outcome: "refused", message: refusal };
     const item = (run.items as ChecklistItem[]).find((i) => i.id === tick.itemId);

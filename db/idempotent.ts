@@ -11,3 +11,12 @@ export async function insertOnce<Row>(trx: Knex.Transaction, table: string, row:
   const existing = await trx(table).where({ crew_id: row.crew_id, idempotency_key: row.idempotency_key }).first();
   return { row: existing as Row, replayed: true };
 }
+
+/**
+ * The row a write with this key made earlier, if it landed: its replay answers "landed before" even when
+ * the revision has moved on since (superseded, say), instead of a refusal for a write that is in fact kept.
+ */
+export async function landedBefore<Row>(trx: Knex.Transaction, table: string, crewId: string, idempotencyKey: string | null): Promise<Row | null> {
+  if (!idempotencyKey) return null;
+  return ((await trx(table).where({ crew_id: crewId, idempotency_key: idempotencyKey }).first()) as Row | undefined) ?? null;
+}

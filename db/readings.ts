@@ -1,7 +1,7 @@
 import "server-only";
 import { db } from "./knex";
 import { recordStep, type Actor } from "./audit-log";
-import { insertOnce } from "./idempotent";
+import { insertOnce, landedBefore } from "./idempotent";
 import { lockedRevisionState, onSiteRefusal, type OnSiteWrite } from "./checklists";
 import type { ReadingBody } from "@/lib/validations/review";
 import type { Prediction } from "@/lib/review/reading-prediction";
@@ -84,6 +84,8 @@ export async function recordReading(
   return db.transaction(async (trx) => {
     const revision = await lockedRevisionState(trx, crewId, rigId, revisionId);
     if (!revision) return { outcome: "not_found" };
+    const earlier = await landedBefore<{ id: string }>(trx, "tension_readings", crewId, reading.idempotencyKey ?? null);
+    if (earlier) return { outcome: "done", value: earlier.id, replayed: true };
     const refusal = onSiteRefusal(revision, "readings are recorded");
     if (refusal) return { outcome: "refused", message: refusal };
     const prediction = predict(revision.inputs);

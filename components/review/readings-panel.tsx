@@ -1,5 +1,6 @@
 "use client";
 
+import { useEffect, useMemo } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm, useWatch, type Control } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -7,7 +8,9 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { FormError } from "@/components/forms/form-error";
-import { callApi, getJson } from "@/components/forms/call-api";
+import { getJson } from "@/components/forms/call-api";
+import { sendOrQueue } from "@/components/offline/outbox";
+import { useQueuedWrites } from "@/components/offline/use-offline";
 import { useQuantityText } from "@/components/forms/use-quantity-text";
 import type { TensionReading } from "@/db/readings";
 import { readingSchema, type ReadingBody } from "@/lib/validations/review";
@@ -43,19 +46,21 @@ export const differenceText = (r: TensionReading) => {
 /** Load-cell readings on the signed-off revision: the form, and each reading beside the engine's prediction. */
 export function ReadingsPanel({
   rigId,
+  rigName,
   revisionId,
   units,
   canRecord,
   readAt,
 }: {
   rigId: string;
+  rigName: string;
   revisionId: string;
   units: UnitSystem;
   canRecord: boolean;
   readAt: "a" | "b";
 }) {
   const url = `/api/rigs/${rigId}/revisions/${revisionId}/readings`;
-  const key = ["rig", rigId, "revision", revisionId, "readings"];
+  const key = useMemo(() => ["rig", rigId, "revision", revisionId, "readings"], [rigId, revisionId]);
   const client = useQueryClient();
   const readings = useQuery({ queryKey: key, queryFn: () => getJson<{ readings: TensionReading[] }>(url).then((b) => b.readings) });
   const form = useForm<Values, unknown, ReadingBody>({
@@ -65,17 +70,30 @@ export function ReadingsPanel({
   const kind = useWatch({ control: form.control, name: "kind" });
   const save = useMutation({
     mutationFn: async (values: ReadingBody) => {
-      const answer = await callApi("POST", url, { ...values, idempotencyKey: crypto.randomUUID() });
-      if (!answer.ok) {
-        for (const [field, message] of Object.entries(answer.fieldErrors)) form.setError(field, { type: "server", message });
-        throw new Error(answer.error);
+      const sent = await sendOrQueue({
+        url,
+        body: values,
+        what: `Reading of ${formatLoad(values.measuredN, units)} at anchor ${values.anchor.toUpperCase()} on ${rigName}`,
+        rigId,
+        target: { kind: "reading", revisionId, measuredN: values.measuredN, anchor: values.anchor },
+      });
+      if (sent.outcome === "refused") {
+        for (const [field, message] of Object.entries(sent.fieldErrors)) form.setError(field, { type: "server", message });
+        throw new Error(sent.error);
       }
+      return sent.outcome;
     },
-    onSuccess: () => {
+    onSuccess: (outcome) => {
       form.reset({ kind, anchor: form.getValues("anchor"), note: "" });
-      return client.invalidateQueries({ queryKey: key });
+      if (outcome === "sent") return client.invalidateQueries({ queryKey: key });
     },
   });
+  // Readings made offline are listed at once, marked as waiting; once sent, the server's list (with its predictions) is read again.
+  const waiting = (useQueuedWrites().items ?? []).filter((w) => !w.refusal && w.target.kind === "reading" && w.target.revisionId === revisionId);
+  const waitingCount = waiting.length;
+  useEffect(() => {
+    if (waitingCount === 0) void client.invalidateQueries({ queryKey: key });
+  }, [waitingCount, client, key]);
 
   return (
     <div className="space-y-4">
@@ -114,6 +132,15 @@ export function ReadingsPanel({
           </Button>
           <FormError message={save.error?.message} />
         </form>
+      ) : null}
+      {waiting.length ? (
+        <ul className="space-y-1 rounded-panel border-2 border-caution-500 bg-caution-100 p-3 text-sm" aria-label="Readings waiting to sync">
+          {waiting.map((w) => (
+            <li key={w.key}>
+              {w.what}, made {when(w.madeAt)}: waiting to sync; the prediction beside it is worked out when it reaches the crew.
+            </li>
+          ))}
+        </ul>
       ) : null}
       {readings.error ? <FormError message={readings.error.message} /> : null}
       {readings.data?.length ? (

@@ -21,6 +21,7 @@ import { ChecklistRuns } from "@/components/review/checklist-runs";
 import { ReadingsPanel } from "@/components/review/readings-panel";
 import { AuditLog } from "@/components/review/audit-log";
 import { rigReviewData } from "@/lib/review/rig-review-data";
+import { KeepRig } from "@/components/offline/keep-rig";
 
 export const metadata: Metadata = { title: "Rig" };
 
@@ -78,10 +79,23 @@ export default async function RigPage({ params, searchParams }: { params: Promis
           </>
         }
       />
-      <p className="-mt-4 mb-6 flex flex-wrap gap-x-5 gap-y-1 text-sm">
+      <p className="-mt-4 mb-2 flex flex-wrap gap-x-5 gap-y-1 text-sm">
         <Link href={`/rigs/${rig.id}/card?revision=${revision.id}`}>Rig card to print</Link>
         <a href={`/api/rigs/${rig.id}/revisions/${revision.id}/card`}>Rig card as PDF</a>
       </p>
+      <div className="mb-6">
+        <KeepRig
+          rig={{
+            rigId: rig.id,
+            name: rig.name,
+            revisionText: `Revision ${revision.number}, ${REVISION_STATE_LABELS[revision.state].toLowerCase()}`,
+            siteName: rig.siteName ?? null,
+            signedOffNumber: signed?.revisionNumber ?? null,
+          }}
+          revisionId={revision.id}
+          signedOffRevisionId={signed?.revisionId ?? null}
+        />
+      </div>
       <div className="space-y-6">
         <SignOffStatus rigId={rig.id} signOff={signed} verification={review.verification} latest={rig.head} />
         {review.reusedFrom ? (
@@ -114,7 +128,13 @@ export default async function RigPage({ params, searchParams }: { params: Promis
         {signed ? (
           <Panel title={`On site: signed-off revision ${signed.revisionNumber}`} id="on-site">
             <h3 className="font-semibold">Checklist</h3>
-            <ChecklistRuns rigId={rig.id} revisionId={signed.revisionId} canRun={can(context.role, "checklist.run")} hasTemplate={review.hasChecklist} />
+            <ChecklistRuns
+              rigId={rig.id}
+              rigName={rig.name}
+              revisionId={signed.revisionId}
+              canRun={can(context.role, "checklist.run")}
+              hasTemplate={review.hasChecklist}
+            />
             <h3 className="pt-2 font-semibold">Measured tension</h3>
             <p className="text-sm text-ink-600">
               A load cell&apos;s reading beside the engine&apos;s prediction for the same conditions on this revision. A large difference means the line, the
@@ -122,6 +142,7 @@ export default async function RigPage({ params, searchParams }: { params: Promis
             </p>
             <ReadingsPanel
               rigId={rig.id}
+              rigName={rig.name}
               revisionId={signed.revisionId}
               units={data.units}
               canRecord={can(context.role, "reading.write")}

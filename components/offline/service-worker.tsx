@@ -1,0 +1,26 @@
+"use client";
+
+import { SerwistProvider } from "@serwist/turbopack/react";
+import type { ReactNode } from "react";
+import { SERVICE_WORKER_URL } from "@/lib/offline/urls";
+
+// The development server rebuilds pages on every request: a service worker there would only serve stale
+// ones, so it is registered in the production build alone.
+const enabled = process.env.NODE_ENV === "production";
+
+/** Registers the service worker for the whole site. Pages are kept as they are opened; nothing reloads by itself when the signal returns. */
+export function OfflineSupport({ children }: { children: ReactNode }) {
+  return (
+    <SerwistProvider swUrl={SERVICE_WORKER_URL} disable={!enabled} reloadOnOnline={false} cacheOnNavigation={false}>
+      {children}
+    </SerwistProvider>
+  );
+}
+
+/** True when a service worker keeps pages on this phone (production build, a browser that has them). */
+export const canKeepPages = () => enabled && typeof window !== "undefined" && "serviceWorker" in navigator && Boolean(window.serwist);
+
+/** Asks the service worker to fetch and keep these addresses now; resolves once they are kept. */
+export async function keepAddresses(urls: string[]): Promise<void> {
+  await window.serwist.messageSW({ type: "CACHE_URLS", payload: { urlsToCache: urls } });
+}
