@@ -19,8 +19,9 @@ export function ConnectionStatus() {
   const refused = items?.filter((w) => w.refusal).length ?? 0;
 
   useEffect(() => {
-    if (!online || waiting === 0) return;
-    const send = () => void sendQueued().then((summary) => setStoppedBecause(summary.stoppedBecause));
+    if (waiting === 0) return;
+    // Tried even when the last try found no signal: that is how the indicator learns it is back.
+    const send = () => navigator.onLine && void sendQueued().then((summary) => setStoppedBecause(summary.stoppedBecause));
     send();
     const timer = window.setInterval(send, RETRY_MS);
     return () => window.clearInterval(timer);

@@ -14,55 +14,48 @@ interface KeepRigProps {
   signedOffRevisionId: string | null;
 }
 
-type Keeping = { state: "idle" } | { state: "keeping" } | { state: "kept"; at: string } | { state: "failed"; why: string };
+// The copy this phone holds (when it was synced, if ever) and whether a sync is under way or just failed.
+type Keeping = { keptAt: string | null; syncing: boolean; failure: string | null };
 
 /**
  * Keeps an opened rig on this phone for the site: its page, its card (print page and PDF), its checklist
- * runs and readings, fetched now while there is a connection. Offline, says when the copy shown was made.
+ * runs and readings, fetched now while there is a connection. Without one, says when the copy shown was made.
  */
 export function KeepRig({ rig, revisionId, signedOffRevisionId }: KeepRigProps) {
   const online = useOnline();
-  const [keeping, setKeeping] = useState<Keeping>({ state: "idle" });
+  const [keeping, setKeeping] = useState<Keeping>({ keptAt: null, syncing: false, failure: null });
   const { rigId, name, revisionText, siteName, signedOffNumber } = rig;
 
   useEffect(() => {
     let current = true;
-    const settle = (next: Keeping) => current && setKeeping(next);
-    if (!online) {
-      keptRigs().then(
-        (kept) => {
-          const mine = kept.find((k) => k.rigId === rigId);
-          settle(mine ? { state: "kept", at: mine.syncedAt } : { state: "idle" });
-        },
-        (error: Error) => settle({ state: "failed", why: error.message }),
-      );
-    } else if (canKeepPages()) {
-      settle({ state: "keeping" });
+    const settle = (next: Partial<Keeping>) => current && setKeeping((was) => ({ ...was, ...next }));
+    keptRigs().then(
+      (kept) => settle({ keptAt: kept.find((k) => k.rigId === rigId)?.syncedAt ?? null }),
+      (error: Error) => settle({ failure: error.message }),
+    );
+    if (online && canKeepPages()) {
+      settle({ syncing: true, failure: null });
       keepAddresses(rigOfflineUrls(rigId, revisionId, signedOffRevisionId))
         .then(async () => {
           const syncedAt = new Date().toISOString();
           await keepRig({ rigId, name, revisionText, siteName, signedOffNumber, syncedAt });
-          settle({ state: "kept", at: syncedAt });
+          settle({ keptAt: syncedAt, syncing: false });
         })
-        .catch((error: Error) => settle({ state: "failed", why: error.message }));
+        .catch((error: Error) => settle({ syncing: false, failure: error.message }));
     }
     return () => {
       current = false;
     };
   }, [online, rigId, name, revisionText, siteName, signedOffNumber, revisionId, signedOffRevisionId]);
 
-  const text =
-    keeping.state === "keeping"
-      ? "Keeping this rig on this phone for offline use…"
-      : keeping.state === "kept"
-        ? online
-          ? `Kept on this phone for offline use, synced ${when(keeping.at)}.`
-          : `Offline: this is the copy kept on this phone, last synced ${when(keeping.at)}. Writes made now wait and are sent when the signal returns.`
-        : keeping.state === "failed"
-          ? `Not kept for offline use: ${keeping.why}`
-          : online
-            ? null
-            : "Offline: this page was kept by the browser, with no record of when it was synced.";
+  const copy = keeping.keptAt ? `last synced ${when(keeping.keptAt)}` : null;
+  const text = keeping.syncing
+    ? "Keeping this rig on this phone for offline use…"
+    : keeping.failure
+      ? `Not synced now: ${keeping.failure}${copy ? ` The copy on this phone was ${copy}.` : ""}`
+      : online
+        ? copy && `Kept on this phone for offline use, ${copy}.`
+        : `Offline: this is the copy kept on this phone${copy ? `, ${copy}` : ""}. Ticks and readings made now wait and are sent when the signal returns.`;
   if (!text) return null;
   return (
     <p className="text-sm text-ink-600" data-testid="offline-keeping">

@@ -32,12 +32,28 @@ export type SendOutcome =
 
 const CHANGED = "spanwright:queued-writes";
 let lastOrder = 0;
+// Whether the last write sent reached the server: a browser may say it is online with no signal at all.
+let reachable = true;
 
 function notify() {
   if (typeof window !== "undefined") window.dispatchEvent(new Event(CHANGED));
 }
 
-/** Calls `listener` whenever the queue changes in this tab. */
+/** False once a write found no connection, until one reaches the server again. */
+export const serverReachable = () => reachable;
+
+// Every write goes through here, so the queue knows whether the server can be reached.
+async function post(url: string, body: Record<string, unknown>): Promise<ApiAnswer> {
+  const answer = await callApi("POST", url, body);
+  const now = answer.ok || answer.status !== 0;
+  if (now !== reachable) {
+    reachable = now;
+    notify();
+  }
+  return answer;
+}
+
+/** Calls `listener` whenever the queue, or whether the server can be reached, changes in this tab. */
 export function onQueueChange(listener: () => void): () => void {
   window.addEventListener(CHANGED, listener);
   return () => window.removeEventListener(CHANGED, listener);
@@ -73,7 +89,7 @@ export async function sendOrQueue(newWrite: NewWrite): Promise<SendOutcome> {
     // No storage: the write can still be sent while online.
   }
   if (!waiting && !isOffline()) {
-    const answer = await callApi("POST", newWrite.url, body);
+    const answer = await post(newWrite.url, body);
     if (answer.ok) return { outcome: "sent", body: answer.body };
     if (answer.status !== 0) return { outcome: "refused", error: answer.error, fieldErrors: answer.fieldErrors };
   }
@@ -111,7 +127,7 @@ async function sendInOrder(): Promise<SendSummary> {
   const summary: SendSummary = { sent: 0, refused: 0, stoppedBecause: null };
   for (const queued of await queuedWrites()) {
     if (queued.refusal) continue;
-    const answer = await callApi("POST", queued.url, queued.body);
+    const answer = await post(queued.url, queued.body);
     if (answer.ok) {
       await remove("queued-writes", queued.key);
       summary.sent += 1;

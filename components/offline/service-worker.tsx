@@ -20,7 +20,18 @@ export function OfflineSupport({ children }: { children: ReactNode }) {
 /** True when a service worker keeps pages on this phone (production build, a browser that has them). */
 export const canKeepPages = () => enabled && typeof window !== "undefined" && "serviceWorker" in navigator && Boolean(window.serwist);
 
-/** Asks the service worker to fetch and keep these addresses now; resolves once they are kept. */
+// The service worker answers only once every address is kept; with no signal it never answers.
+const KEEP_TIMEOUT_MS = 60_000;
+
+/** Asks the service worker to fetch and keep these addresses now; resolves once they are kept, rejects when that does not happen in time. */
 export async function keepAddresses(urls: string[]): Promise<void> {
-  await window.serwist.messageSW({ type: "CACHE_URLS", payload: { urlsToCache: urls } });
+  let timer: number | undefined;
+  const timeout = new Promise<never>((_, reject) => {
+    timer = window.setTimeout(() => reject(new Error("its pages could not be fetched now (no connection?).")), KEEP_TIMEOUT_MS);
+  });
+  try {
+    await Promise.race([window.serwist.messageSW({ type: "CACHE_URLS", payload: { urlsToCache: urls } }), timeout]);
+  } finally {
+    window.clearTimeout(timer);
+  }
 }

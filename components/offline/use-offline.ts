@@ -1,23 +1,26 @@
 "use client";
 
-import { useCallback, useEffect, useState, useSyncExternalStore } from "react";
-import { onQueueChange, queuedWrites, type QueuedWrite } from "./outbox";
+import { useCallback, useEffect, useRef, useState, useSyncExternalStore } from "react";
+import { useQueryClient, type QueryKey } from "@tanstack/react-query";
+import { onQueueChange, queuedWrites, serverReachable, type QueuedWrite } from "./outbox";
 import { keptRigs, type KeptRig } from "./kept-rigs";
 
 function subscribeOnline(listener: () => void) {
   window.addEventListener("online", listener);
   window.addEventListener("offline", listener);
+  const stopQueue = onQueueChange(listener);
   return () => {
     window.removeEventListener("online", listener);
     window.removeEventListener("offline", listener);
+    stopQueue();
   };
 }
 
-/** Whether the browser believes it has a connection (true while rendering on the server). */
+/** Whether there is a connection: the browser says so and the last write reached the server (true while rendering on the server). */
 export const useOnline = () =>
   useSyncExternalStore(
     subscribeOnline,
-    () => navigator.onLine,
+    () => navigator.onLine && serverReachable(),
     () => true,
   );
 
@@ -45,3 +48,13 @@ export const useQueuedWrites = () => useKept<QueuedWrite>(queuedWrites);
 
 /** The rigs kept on this phone for offline reading. */
 export const useKeptRigs = () => useKept<KeptRig>(keptRigs);
+
+/** Reads the server's record again once the writes shown as waiting on it have all been sent. */
+export function useRefetchWhenSent(waitingCount: number, queryKey: QueryKey) {
+  const client = useQueryClient();
+  const before = useRef(waitingCount);
+  useEffect(() => {
+    if (before.current > 0 && waitingCount === 0) void client.invalidateQueries({ queryKey });
+    before.current = waitingCount;
+  }, [waitingCount, client, queryKey]);
+}

@@ -1,12 +1,12 @@
 "use client";
 
-import { useEffect, useMemo, useState } from "react";
+import { useMemo, useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/forms/form-error";
 import { callApi, getJson } from "@/components/forms/call-api";
 import { sendOrQueue } from "@/components/offline/outbox";
-import { useOnline, useQueuedWrites } from "@/components/offline/use-offline";
+import { useOnline, useQueuedWrites, useRefetchWhenSent } from "@/components/offline/use-offline";
 import type { ChecklistRun } from "@/db/checklists";
 import { when } from "@/lib/when";
 
@@ -62,9 +62,7 @@ export function ChecklistRuns({
   const queued = useQueuedWrites().items ?? [];
   const waitingTicks = queued.flatMap((w) => (!w.refusal && w.target.kind === "tick" && w.target.runId === runs.data?.[0]?.id ? [w.target] : []));
   const waitingCount = waitingTicks.length;
-  useEffect(() => {
-    if (waitingCount === 0) void client.invalidateQueries({ queryKey: key });
-  }, [waitingCount, client, key]);
+  useRefetchWhenSent(waitingCount, key);
 
   if (runs.error) return <FormError message={runs.error.message} />;
   if (!runs.data) return <p className="text-ink-600">Loading the checklist…</p>;

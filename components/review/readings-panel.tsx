@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useMemo } from "react";
+import { useMemo } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm, useWatch, type Control } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -10,7 +10,7 @@ import { Select } from "@/components/ui/select";
 import { FormError } from "@/components/forms/form-error";
 import { getJson } from "@/components/forms/call-api";
 import { sendOrQueue } from "@/components/offline/outbox";
-import { useQueuedWrites } from "@/components/offline/use-offline";
+import { useQueuedWrites, useRefetchWhenSent } from "@/components/offline/use-offline";
 import { useQuantityText } from "@/components/forms/use-quantity-text";
 import type { TensionReading } from "@/db/readings";
 import { readingSchema, type ReadingBody } from "@/lib/validations/review";
@@ -91,9 +91,7 @@ export function ReadingsPanel({
   // Readings made offline are listed at once, marked as waiting; once sent, the server's list (with its predictions) is read again.
   const waiting = (useQueuedWrites().items ?? []).filter((w) => !w.refusal && w.target.kind === "reading" && w.target.revisionId === revisionId);
   const waitingCount = waiting.length;
-  useEffect(() => {
-    if (waitingCount === 0) void client.invalidateQueries({ queryKey: key });
-  }, [waitingCount, client, key]);
+  useRefetchWhenSent(waitingCount, key);
 
   return (
     <div className="space-y-4">

@@ -34,6 +34,8 @@ const serwist = new Serwist({
       matcher: (options) => sameOriginGet(options) && isKeptData(options.url.pathname),
       handler: new NetworkFirst({ cacheName: KEPT_CACHES.data, networkTimeoutSeconds: 10, plugins: [keepOnlyWhatWasAsked] }),
     },
+    // Any other page goes to the network, so that with no signal the fallback below answers for it.
+    { matcher: ({ request }) => request.mode === "navigate", handler: new NetworkOnly() },
   ],
   fallbacks: { entries: [{ url: OFFLINE_PAGE, matcher: ({ request }) => request.destination === "document" }] },
 });
