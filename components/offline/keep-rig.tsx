@@ -50,7 +50,7 @@ export function KeepRig({ rig, revisionId, signedOffRevisionId }: KeepRigProps) 
 
   const copy = keeping.keptAt ? `last synced ${when(keeping.keptAt)}` : null;
   const text = keeping.syncing
-    ? "Keeping this rig on this phone for offline use…"
+    ? `Keeping this rig on this phone for offline use…${copy ? ` (the copy shown was ${copy})` : ""}`
     : keeping.failure
       ? `Not synced now: ${keeping.failure}${copy ? ` The copy on this phone was ${copy}.` : ""}`
       : online

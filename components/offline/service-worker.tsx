@@ -1,6 +1,7 @@
 "use client";
 
 import { SerwistProvider } from "@serwist/turbopack/react";
+import { messageSW } from "@serwist/window";
 import type { ReactNode } from "react";
 import { SERVICE_WORKER_URL } from "@/lib/offline/urls";
 
@@ -30,7 +31,9 @@ export async function keepAddresses(urls: string[]): Promise<void> {
     timer = window.setTimeout(() => reject(new Error("its pages could not be fetched now (no connection?).")), KEEP_TIMEOUT_MS);
   });
   try {
-    await Promise.race([window.serwist.messageSW({ type: "CACHE_URLS", payload: { urlsToCache: urls } }), timeout]);
+    // To the active worker itself: the registration helper's own channel waits for a worker it installed, which a page opened later never sees.
+    const worker = navigator.serviceWorker.ready.then((registration) => registration.active!);
+    await Promise.race([worker.then((active) => messageSW(active, { type: "CACHE_URLS", payload: { urlsToCache: urls } })), timeout]);
   } finally {
     window.clearTimeout(timer);
   }
