@@ -6,6 +6,16 @@ import { evaluateRig, tensionForSag } from "@/physics";
 import { AppClient } from "./support/http";
 import { createCrew, testDb, type FixtureCrew } from "./support/fixtures";
 import { latestMailTo } from "./support/mailbox";
+import {
+  json,
+  newRig as newRigAs,
+  reviewStep as step,
+  signedRig as signedRigAs,
+  signOff,
+  submitForReview,
+  supersede,
+  type RigRevision,
+} from "./support/rig-steps";
 
 // Review and sign-off, the audit log's and the sign-off's immutability in the database, reuse, the
 // on-site checklist and load-cell readings, over HTTP against the real server and PostgreSQL.
@@ -15,27 +25,10 @@ let crew: FixtureCrew;
 let other: FixtureCrew;
 const as = {} as Record<Who | "outsider", AppClient>;
 
-async function json(response: Response) {
-  return { status: response.status, body: await response.json() };
-}
-
-async function newRig(client: AppClient = as.rigger, name = "Review test rig") {
-  const { status, body } = await json(await client.post("/api/rigs", { name, siteId: null, inputs: example }));
-  expect(status).toBe(201);
-  return { rigId: body.rig.id as string, revisionId: body.revision.id as string };
-}
-
-const step = (client: AppClient, rig: { rigId: string; revisionId: string }, body: object) =>
-  client.post(`/api/rigs/${rig.rigId}/revisions/${rig.revisionId}/review`, body);
-const submit = (rig: { rigId: string; revisionId: string }, client = as.rigger) => step(client, rig, { step: "submit", note: "Please check the bridle." });
-const sign = (rig: { rigId: string; revisionId: string }, client = as.lead) => step(client, rig, { step: "sign", confirm: true });
-
-async function signedRig() {
-  const rig = await newRig();
-  expect((await submit(rig)).status).toBe(200);
-  expect((await sign(rig)).status).toBe(200);
-  return rig;
-}
+const newRig = (client: AppClient = as.rigger) => newRigAs(client);
+const submit = (rig: RigRevision, client = as.rigger) => submitForReview(client, rig);
+const sign = (rig: RigRevision, client = as.lead) => signOff(client, rig);
+const signedRig = () => signedRigAs(as.rigger, as.lead);
 
 /** An SQL statement's error, or null when it went through. */
 async function sqlError(run: () => Promise<unknown>): Promise<string | null> {
@@ -308,17 +301,7 @@ describe("the day on site", () => {
 
   it("refuses a reading on a superseded revision with the reason", async () => {
     const first = await signedRig();
-    const saved = await json(
-      await as.rigger.post(`/api/rigs/${first.rigId}/revisions`, {
-        basedOnRevisionId: first.revisionId,
-        name: "Review test rig",
-        siteId: null,
-        inputs: example,
-      }),
-    );
-    const second = { rigId: first.rigId, revisionId: saved.body.revision.id };
-    await submit(second);
-    await sign(second);
+    await supersede(as.rigger, as.lead, first);
     const { status, body } = await json(
       await as.member.post(`/api/rigs/${first.rigId}/revisions/${first.revisionId}/readings`, { kind: "pretension", anchor: "b", measuredN: 3400, sagM: 0.5 }),
     );
