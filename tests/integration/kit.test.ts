@@ -1,43 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { AppClient } from "./support/http";
 import { createCrew, testDb, type FixtureCrew } from "./support/fixtures";
+import { MODELS } from "./support/samples";
 import { itemsInService } from "@/db/kit";
 import { db } from "@/db/knex";
-
-// Invented gear of every kind, with specs inside the ranges the schema allows.
-const MODELS = {
-  webbing: {
-    name: "Test tubular 25",
-    specs: {
-      widthMm: 25,
-      massPerMetreG: 45,
-      mbsKN: 30,
-      stretchPoints: [
-        { tensionKN: 0, elongationPct: 0 },
-        { tensionKN: 5, elongationPct: 4 },
-      ],
-    },
-  },
-  rope: {
-    name: "Test static 11",
-    specs: {
-      diameterMm: 11,
-      construction: "static",
-      mbsKN: 32,
-      massPerMetreG: 80,
-      stretchPoints: [
-        { tensionKN: 0, elongationPct: 0 },
-        { tensionKN: 1, elongationPct: 1.2 },
-      ],
-    },
-  },
-  brake: { name: "Test cam brake", specs: { minRopeMm: 9, maxRopeMm: 12, mbsKN: 20 } },
-  line_grip: { name: "Test line grip", specs: { minRopeMm: 10, maxRopeMm: 11, mbsKN: 15 } },
-  pulley: { name: "Test pulley 50", specs: { sheaveDiameterMm: 50, efficiency: 0.92, mbsKN: 36 } },
-  connector: { name: "Test shackle", specs: { mbsKN: 45 } },
-  sling: { name: "Test sling 120", specs: { mbsKN: 40 } },
-  other: { name: "Test tree pad", specs: {} },
-} as const;
 
 let crew: FixtureCrew;
 let other: FixtureCrew;

@@ -3,6 +3,7 @@ import example from "@/physics/examples/quarry-highline.json";
 import { evaluateRig } from "@/physics";
 import { AppClient } from "./support/http";
 import { createCrew, testDb, type FixtureCrew } from "./support/fixtures";
+import { SITE } from "./support/samples";
 
 // Sites and rigs over HTTP against the real server and PostgreSQL: validation, roles, isolation
 // between crews, revisions with a stale save answering 409, and Kit gear used by id.
@@ -10,25 +11,6 @@ import { createCrew, testDb, type FixtureCrew } from "./support/fixtures";
 let crew: FixtureCrew;
 let other: FixtureCrew;
 const as: Record<"member" | "rigger" | "lead" | "outsider", AppClient> = {} as never;
-
-const SITE = {
-  name: "Test gorge",
-  accessNotes: "",
-  spanM: 60,
-  heightDifferenceM: 1,
-  measuredBy: "laser",
-  uncertaintyM: 0.3,
-  ground: {
-    kind: "profile",
-    points: [
-      { xM: 0, heightM: -5 },
-      { xM: 30, heightM: -40 },
-      { xM: 60, heightM: -4 },
-    ],
-  },
-  anchors: { a: { kind: "bolts", boltCount: 2, boltSizeMm: 12, notes: "" }, b: { kind: "tree", trunkDiameterCm: 55, notes: "" } },
-  coordinates: { latitude: 46.5, longitude: 8.1 },
-};
 
 const WEBBING = {
   kind: "webbing",
