@@ -5,6 +5,9 @@ import { isUniqueViolation } from "./errors";
 /** Records a wish to move the account to a new address; only the link sent there completes it. Earlier wishes stop counting. */
 export async function createEmailChange(userId: string, newEmail: string, tokenHash: string): Promise<void> {
   await db.transaction(async (trx) => {
+    // One change at a time per person: without the lock, parallel requests each spend only the links they
+    // can see and several stay live, though only the newest should.
+    await trx("users").where({ id: userId }).forUpdate().first("id");
     await trx("email_changes").where({ user_id: userId }).whereNull("used_at").update({ used_at: trx.fn.now() });
     await trx("email_changes").insert({ user_id: userId, new_email: newEmail, token_hash: tokenHash, expires_at: trx.raw("now() + interval '1 hour'") });
   });

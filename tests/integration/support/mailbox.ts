@@ -10,16 +10,22 @@ async function messagesTo(address: string): Promise<StoredMessage[]> {
   return messages.filter((m) => m.to.includes(address)).sort((a, b) => b.id.localeCompare(a.id));
 }
 
-/** The tokens of the confirmation links in the first `count` messages to this address, once that many arrived. */
-export async function allLinksTo(address: string, count: number, timeoutMs = 5000): Promise<string[]> {
+/** The tokens of the links (under `pathPrefix`) in the messages to this address, once `count` arrived. */
+async function tokensTo(address: string, pathPrefix: string, count: number, timeoutMs: number): Promise<string[]> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     const mine = await messagesTo(address);
-    if (mine.length >= count) return mine.map((m) => linkIn(m, "/confirm-email?token=").searchParams.get("token")!);
+    if (mine.length >= count) return mine.map((m) => linkIn(m, pathPrefix).searchParams.get("token")!);
     await new Promise((r) => setTimeout(r, 100));
   }
   throw new Error(`Fewer than ${count} e-mails to ${address} arrived within ${timeoutMs} ms.`);
 }
+
+/** The tokens of the e-mail confirmation links sent to this address, once `count` arrived. */
+export const allLinksTo = (address: string, count: number, timeoutMs = 5000) => tokensTo(address, "/confirm-email?token=", count, timeoutMs);
+
+/** The tokens of the password reset links sent to this address, once `count` arrived. */
+export const resetLinksTo = (address: string, count: number, timeoutMs = 5000) => tokensTo(address, "/reset-password?token=", count, timeoutMs);
 
 /** Waits for the newest message the local SMTP fake kept for this address. */
 export async function latestMailTo(address: string, timeoutMs = 5000): Promise<StoredMessage> {
