@@ -8,6 +8,7 @@ import * as sitesAndRigs from "./20261201000020_sites_and_rigs";
 import * as crewMinimumClearance from "./20261202000030_crew_minimum_clearance";
 import * as reviewAndSignOff from "./20261202000040_review_and_sign_off";
 import * as emailChanges from "./20261202000050_email_changes";
+import * as crewBoundKitKeys from "./20261202000060_crew_bound_kit_keys";
 
 // Every migration, in order, imported statically so that the same list loads under tsx, Vitest
 // and the Next.js server bundle alike. A unit test checks that no file of this folder is missing.
@@ -21,6 +22,7 @@ const migrations: Record<string, Knex.Migration> = {
   "20261202000030_crew_minimum_clearance.ts": crewMinimumClearance,
   "20261202000040_review_and_sign_off.ts": reviewAndSignOff,
   "20261202000050_email_changes.ts": emailChanges,
+  "20261202000060_crew_bound_kit_keys.ts": crewBoundKitKeys,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {
