@@ -55,15 +55,24 @@ export function jsonDepthWithin(text: string, limit: number): boolean {
   return true;
 }
 
-/** True when some string in the value, or some key, holds a NUL character: PostgreSQL cannot store one in text. */
-export function holdsNul(value: unknown): boolean {
-  if (typeof value === "string") return value.includes("\u0000");
-  if (Array.isArray(value)) return value.some(holdsNul);
-  if (value !== null && typeof value === "object") return Object.entries(value).some(([key, v]) => key.includes("\u0000") || holdsNul(v));
+/** True when some string in the value, or some key, passes the test. */
+function someText(value: unknown, test: (text: string) => boolean): boolean {
+  if (typeof value === "string") return test(value);
+  if (Array.isArray(value)) return value.some((v) => someText(v, test));
+  if (value !== null && typeof value === "object") return Object.entries(value).some(([key, v]) => test(key) || someText(v, test));
   return false;
 }
 
+/** True when some string in the value, or some key, holds a NUL character: PostgreSQL cannot store one in text. */
+export const holdsNul = (value: unknown) => someText(value, (text) => text.includes("\u0000"));
+
+/** True when some text holds half of a UTF-16 surrogate pair (JSON can say "\ud800"): it is no character, and UTF-8 cannot hold it. */
+export const holdsLoneSurrogate = (value: unknown) =>
+  someText(value, (text) => /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/.test(text));
+
 export const NUL_REFUSAL = "Nothing was saved: the text contains a NUL character (code 0), which no form can type. Remove it and send again.";
+const SURROGATE_REFUSAL =
+  "Nothing was saved: the text contains half of a character (an unpaired UTF-16 surrogate), which no form can type. Remove it and send again.";
 
 /** A JSON body of at most JSON_BODY_LIMIT bytes and JSON_DEPTH_LIMIT levels, parsed; else a 400 or 413 saying what is allowed. */
 export async function readJson(request: Request): Promise<unknown> {
@@ -83,5 +92,6 @@ export async function readJson(request: Request): Promise<unknown> {
     throw new RequestError(400, "The request body is not valid JSON.");
   }
   if (holdsNul(value)) throw new RequestError(400, NUL_REFUSAL);
+  if (holdsLoneSurrogate(value)) throw new RequestError(400, SURROGATE_REFUSAL);
   return value;
 }

@@ -166,7 +166,6 @@ export function prepareRigInput(values: unknown, catalogue: KitCatalogue, site: 
   const rope = pick("brake.ropeModelId", input.brake && { ...input.brake, name: undefined }, "ropeModelId", PICK_KINDS.brakeRope);
   if (rope && input.brake) input.brake.ropeDiameterMm = Number(rope.specs.diameterMm);
   const device = pick("brake.modelId", input.brake && { ...input.brake, name: input.brake.device }, "modelId", PICK_KINDS.brake);
-  const typedResults = (input.slipBench ?? []).filter((r) => !isBenchResult(r));
   const benchResults = device ? catalogue.bench.filter((t) => t.deviceId === device.id) : [];
   if (device && input.brake) {
     input.brake.device = device.name;
@@ -177,16 +176,20 @@ export function prepareRigInput(values: unknown, catalogue: KitCatalogue, site: 
       problems.push({ field, message: `${labelOf(field)}: ${diameter} mm rope is outside what ${device.name} takes according to the Kit (${min}–${max} mm).` });
     }
   }
-  input.slipBench = [
-    ...benchResults.map((t): Record<string, unknown> & SlipResult => ({
-      testId: t.id,
-      device: device!.name,
-      ropeDiameterMm: t.ropeDiameterMm,
-      result: t.result,
-      forceN: t.forceN,
-    })),
-    ...typedResults,
-  ];
+  // Slip results that are not a list are left as sent, for the engine to refuse on their field.
+  const typedResults = input.slipBench ?? [];
+  if (Array.isArray(typedResults)) {
+    input.slipBench = [
+      ...benchResults.map((t): Record<string, unknown> & SlipResult => ({
+        testId: t.id,
+        device: device!.name,
+        ropeDiameterMm: t.ropeDiameterMm,
+        result: t.result,
+        forceN: t.forceN,
+      })),
+      ...typedResults.filter((r) => !isBenchResult(r)),
+    ];
+  }
 
   const snapshot: RevisionSnapshot = { site, gear, typed, slipTestIds: benchResults.map((t) => t.id) };
   return { input, snapshot, problems };

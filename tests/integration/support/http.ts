@@ -18,8 +18,9 @@ export class AppClient {
     const init: RequestInit = { method, redirect: "manual", headers: { origin: this.baseUrl, ...headers } };
     const h = init.headers as Record<string, string>;
     if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
-    // Form data, text and streams go as they are (a stream chunked, with no Content-Length); anything else as JSON.
+    // Form data, text, bytes and streams go as they are (a stream chunked, with no Content-Length); anything else as JSON.
     if (body instanceof FormData || typeof body === "string") init.body = body;
+    else if (body instanceof Uint8Array) init.body = new Uint8Array(body);
     else if (body instanceof ReadableStream) Object.assign(init, { body, duplex: "half" });
     else if (body !== undefined) {
       init.body = JSON.stringify(body);

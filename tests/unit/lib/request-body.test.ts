@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { holdsNul, jsonDepthWithin, readBodyBytes, readJson } from "@/lib/request-body";
+import { holdsLoneSurrogate, holdsNul, jsonDepthWithin, readBodyBytes, readJson } from "@/lib/request-body";
 import { RequestError } from "@/lib/http-errors";
 
 const tooLarge = (size: number) => new RequestError(413, `too large: ${size}`);
@@ -47,5 +47,12 @@ describe("readJson", () => {
     expect(holdsNul({ a: [{ b: "x\u0000" }] })).toBe(true);
     expect(holdsNul({ "k\u0000": 1 })).toBe(true);
     expect(holdsNul({ a: ["x", 1, null] })).toBe(false);
+  });
+
+  it("finds half of a surrogate pair anywhere, and lets whole pairs through (a lone surrogate is no character: the Unicode Standard, chapter 3, from memory)", () => {
+    expect(holdsLoneSurrogate({ items: [{ text: "\ud800" }] })).toBe(true);
+    expect(holdsLoneSurrogate({ "k\udc00": 1 })).toBe(true);
+    expect(holdsLoneSurrogate(["a\ud83dz"])).toBe(true);
+    expect(holdsLoneSurrogate({ text: "rope 👩‍👩‍👧 \ud83d\ude00" })).toBe(false);
   });
 });
