@@ -24,6 +24,8 @@ export default defineConfig({
           hookTimeout: 60000,
         },
       },
+      // Stops and starts the database under load: run on its own, after every other suite (scripts/test.ts).
+      { extends: true, test: { name: "faults", include: ["tests/faults/**/*.test.ts"], environment: "node", testTimeout: 30000, hookTimeout: 90000 } },
     ],
   },
 });

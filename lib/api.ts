@@ -7,6 +7,7 @@ import { readJson } from "./request-body";
 import { RigInputError, SolveError } from "@/physics";
 import type { Action } from "./roles";
 import { allowedSentence, rigInputProblem } from "./planner/problems";
+import { isDatabaseUnreachable } from "@/db/errors";
 
 const MUTATING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 
@@ -57,8 +58,17 @@ export function errorResponse(error: unknown): NextResponse {
   if (error instanceof RequestError) {
     return NextResponse.json({ error: error.message, fieldErrors: error.fieldErrors }, { status: error.status, headers: error.headers });
   }
+  if (isDatabaseUnreachable(error)) return databaseUnavailable();
   console.error(error);
   return NextResponse.json({ error: "Something went wrong on the server; nothing was saved. Try again." }, { status: 500 });
+}
+
+/** While the database cannot be reached: a 503 that says so and when to try again (a write is atomic: all of it or none). */
+export function databaseUnavailable(): NextResponse {
+  return NextResponse.json(
+    { error: "The database is not answering just now. Try again in a few seconds: a change is saved whole or not at all." },
+    { status: 503, headers: { "Retry-After": "5" } },
+  );
 }
 
 export { readJson };

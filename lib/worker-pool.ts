@@ -9,7 +9,8 @@ import type { TaskMessage, TaskName, TaskReply, TASKS, WireError } from "./worke
 // turn in a short queue; past it the server answers 503 rather than letting the work pile up in memory.
 
 const SIZE = Math.max(1, Math.min(2, os.availableParallelism()));
-const MAX_WAITING = 16;
+// Enough for every request of 20 busy connections to wait its turn; each waiting job holds at most one 1 MiB body.
+const MAX_WAITING = 32;
 
 interface Job {
   message: TaskMessage;

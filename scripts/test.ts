@@ -36,7 +36,7 @@ async function check(suite: string, command: string, args: string[], env: NodeJS
   return ok;
 }
 
-async function vitest(project: "unit" | "integration", env: NodeJS.ProcessEnv, reportDir: string): Promise<void> {
+async function vitest(project: "unit" | "integration" | "faults", env: NodeJS.ProcessEnv, reportDir: string): Promise<void> {
   console.log(`\n── ${project} (vitest) ──`);
   const report = path.join(reportDir, `vitest-${project}.json`);
   fs.rmSync(report, { force: true });
@@ -99,8 +99,10 @@ async function main(): Promise<number> {
     server = await serveApp({ ...stack.env, NEXT_DIST_DIR: ".next-test" }, stack.settings.appPort);
     await vitest("integration", { ...testEnv, APP_URL: server.url }, reportDir);
     await playwright({ ...testEnv, E2E_BASE_URL: server.url, CHROMIUM_PATH }, reportDir);
+    // Last, as it stops the database in the middle of a load run.
+    await vitest("faults", { ...testEnv, APP_URL: server.url }, reportDir);
   } else {
-    tallies.push({ suite: "integration", passed: 0, failed: 1, skipped: 0 }, { suite: "playwright", passed: 0, failed: 1, skipped: 0 });
+    for (const suite of ["integration", "playwright", "faults"]) tallies.push({ suite, passed: 0, failed: 1, skipped: 0 });
   }
   return summarise();
 }

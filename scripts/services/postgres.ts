@@ -43,9 +43,18 @@ export async function ensurePostgresBinaries(): Promise<string> {
   return bin;
 }
 
-/** Runs a PostgreSQL tool as the `postgres` user when we are root (the server refuses root). */
-function asServerUser(binary: string, args: string[]) {
-  return isRoot() ? runCaptured("runuser", ["-u", "postgres", "--", binary, ...args]) : runCaptured(binary, args);
+/** A PostgreSQL tool's command line, as the `postgres` user when we are root (the server refuses root). */
+export function asServerUserCommand(binary: string, args: string[]): [string, string[]] {
+  return isRoot() ? ["runuser", ["-u", "postgres", "--", binary, ...args]] : [binary, args];
+}
+
+const asServerUser = (binary: string, args: string[]) => runCaptured(...asServerUserCommand(binary, args));
+
+/** pg_ctl's arguments that start the project's server: loopback only, its socket in the data folder, fsync off for tests. */
+export function serverStartArgs(dataDir: string, port: number, profile: Profile): string[] {
+  const logFile = path.join(dataDir, "server.log");
+  const options = `-p ${port} -c listen_addresses=127.0.0.1 -k ${dataDir} -c fsync=${profile === "test" ? "off" : "on"}`;
+  return ["start", "-D", dataDir, "-l", logFile, "-w", "-t", "60", "-o", options];
 }
 
 function serverUserCanWrite(dir: string): boolean {
@@ -145,18 +154,7 @@ export async function startCluster(projectDir: string, profile: Profile, port: n
   }
   await assertPortFree(port, "PostgreSQL", portVariable(profile, "PG_PORT"));
   const logFile = path.join(dataDir, "server.log");
-  const start = asServerUser(path.join(bin, "pg_ctl"), [
-    "start",
-    "-D",
-    dataDir,
-    "-l",
-    logFile,
-    "-w",
-    "-t",
-    "60",
-    "-o",
-    `-p ${port} -c listen_addresses=127.0.0.1 -k ${dataDir} -c fsync=${profile === "test" ? "off" : "on"}`,
-  ]);
+  const start = asServerUser(path.join(bin, "pg_ctl"), serverStartArgs(dataDir, port, profile));
   if (start.status !== 0 || !isRunning(bin, dataDir)) {
     asServerUser(path.join(bin, "pg_ctl"), ["stop", "-D", dataDir, "-m", "immediate"]);
     throw new StackError(`PostgreSQL failed to start on 127.0.0.1:${port}; the end of its log (${logFile}) says:\n${logTail(logFile)}`);

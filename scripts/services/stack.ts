@@ -103,8 +103,9 @@ export async function startStack(profile: Profile): Promise<RunningStack> {
       MAIL_FROM: "Spanwright <no-reply@spanwright.local>",
       DEV_MAILBOX_DIR: mailDir,
       COOKIE_SECURE: "false",
-      // The suites stand in for a proxy on loopback, naming each client's address in X-Forwarded-For.
-      ...(profile === "test" ? { TRUSTED_PROXIES: "127.0.0.1" } : {}),
+      // The suites stand in for a proxy on loopback, naming each client's address in X-Forwarded-For; the fault
+      // suite stops and starts the cluster in PG_DATA_DIR in the middle of a load run.
+      ...(profile === "test" ? { TRUSTED_PROXIES: "127.0.0.1", PG_DATA_DIR: cluster.dataDir } : {}),
     };
     // The demo seed stores its traces' bytes in the bucket, so it runs with the fakes' settings.
     for (const [name, value] of Object.entries(env)) if (name.startsWith("S3_")) process.env[name] = value;

@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 import { databaseHealth } from "@/db/health";
+import { databaseUnavailable } from "@/lib/api";
 import { APP_VERSION } from "@/lib/version";
 
 export const dynamic = "force-dynamic";
@@ -7,5 +8,6 @@ export const dynamic = "force-dynamic";
 // Liveness for load balancers and for the start script: 200 only when the database answers.
 export async function GET() {
   const database = await databaseHealth();
-  return NextResponse.json({ status: database.reachable ? "ok" : "unavailable", version: APP_VERSION, database }, { status: database.reachable ? 200 : 503 });
+  if (!database.reachable) return databaseUnavailable();
+  return NextResponse.json({ status: "ok", version: APP_VERSION, database });
 }
