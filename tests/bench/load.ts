@@ -1,0 +1,99 @@
+// `npm run bench:load`: load on the production build (`npm start`, or the app at BENCH_APP_URL) with autocannon,
+// 20 connections for 20 s on each of the health route, an authenticated list (the Kit's models) and the engine
+// (POST /api/compute with the example rig); then the engine's own rate in this process on one core. The goals
+// are ratios measured in the same run, since the load generator shares the cores with the server.
+import { readFileSync } from "node:fs";
+import autocannon from "autocannon";
+import { evaluateRig } from "../../physics";
+import { DEMO_PASSWORD, DEMO_PEOPLE } from "../../seeds/01_demo_crew";
+
+const APP_URL = process.env.BENCH_APP_URL ?? "http://127.0.0.1:3000";
+const CONNECTIONS = 20;
+const SECONDS = Number(process.env.BENCH_LOAD_SECONDS ?? 20);
+const rig = readFileSync(new URL("../../physics/examples/quarry-highline.json", import.meta.url), "utf8");
+
+interface Figures {
+  rate: number;
+  p99: number;
+  ok: number;
+  other: number;
+}
+
+async function signIn(): Promise<string> {
+  const rigger = DEMO_PEOPLE.find((p) => p.role === "rigger")!;
+  const response = await fetch(`${APP_URL}/api/auth/sign-in`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: APP_URL },
+    body: JSON.stringify({ email: rigger.email, password: DEMO_PASSWORD }),
+  });
+  if (response.status !== 200) throw new Error(`signing in as the demo rigger answered ${response.status}: is ${APP_URL} the demo stack of \`npm start\`?`);
+  return response.headers
+    .getSetCookie()
+    .map((line) => line.split(";")[0])
+    .join("; ");
+}
+
+async function load(title: string, options: Partial<autocannon.Options>): Promise<Figures> {
+  const result = await autocannon({ url: APP_URL, connections: CONNECTIONS, duration: SECONDS, ...options, headers: { origin: APP_URL, ...options.headers } });
+  const figures = { rate: result.requests.average, p99: result.latency.p99, ok: result["2xx"], other: result.non2xx + result.errors + result.timeouts };
+  console.log(`${title}: ${figures.rate.toFixed(0)} req/s, p99 ${figures.p99} ms, ${figures.ok} answered 2xx, ${figures.other} did not`);
+  return figures;
+}
+
+/** Whole-rig evaluations a second in this process (one core), over a few seconds after a warm-up. */
+function engineRate(seconds = 5): number {
+  const input = JSON.parse(rig);
+  const warm = performance.now() + 500;
+  while (performance.now() < warm) evaluateRig(input);
+  let calls = 0;
+  const start = performance.now();
+  while (performance.now() - start < seconds * 1000) {
+    evaluateRig(input);
+    calls++;
+  }
+  return calls / ((performance.now() - start) / 1000);
+}
+
+async function main() {
+  const health = await fetch(`${APP_URL}/api/health`).catch(() => null);
+  if (!health?.ok)
+    throw new Error(`nothing answers ${APP_URL}/api/health: start the production build with \`npm start\` (or set BENCH_APP_URL), then run this again.`);
+  const cookie = await signIn();
+  console.log(`Load on ${APP_URL}: ${CONNECTIONS} connections, ${SECONDS} s each (autocannon on the same cores as the server)\n`);
+  const base = await load("GET /api/health", { method: "GET" });
+  const list = await load("GET /api/kit/models, signed in", { method: "GET", url: `${APP_URL}/api/kit/models`, headers: { cookie } });
+  const compute = await load("POST /api/compute, example rig", {
+    method: "POST",
+    url: `${APP_URL}/api/compute`,
+    headers: { cookie, "content-type": "application/json" },
+    body: rig,
+  });
+  const engine = engineRate();
+  console.log(`evaluateRig in this process, one core: ${engine.toFixed(0)} /s\n`);
+
+  const verdict = (met: boolean) => (met ? "met" : "not met");
+  const rows = [
+    ["Health route", `${base.rate.toFixed(0)} req/s, p99 ${base.p99} ms`, "baseline", ""],
+    [
+      "Kit list, signed in: rate against the health route's",
+      `${((list.rate / base.rate) * 100).toFixed(0)} %`,
+      "≥ 80 %",
+      verdict(list.rate >= 0.8 * base.rate),
+    ],
+    ["Kit list: p99 against the health route's", `${(list.p99 / base.p99).toFixed(2)}× (${list.p99} ms)`, "≤ 3×", verdict(list.p99 <= 3 * base.p99)],
+    [
+      "Compute: rate against the engine in-process on one core",
+      `${((compute.rate / engine) * 100).toFixed(0)} % (${compute.rate.toFixed(0)} of ${engine.toFixed(0)} /s)`,
+      "≥ 70 %",
+      verdict(compute.rate >= 0.7 * engine),
+    ],
+    ["Answers other than 2xx (all three runs)", String(base.other + list.other + compute.other), "0", verdict(base.other + list.other + compute.other === 0)],
+  ];
+  console.log("| Figure | Measured | Goal | |\n| --- | --- | --- | --- |");
+  for (const row of rows) console.log(`| ${row.join(" | ")} |`);
+}
+
+main().catch((error) => {
+  console.error(`bench:load: ${(error as Error).message}`);
+  process.exit(1);
+});
