@@ -137,7 +137,7 @@ function fallHeight(rig: RigInput): number {
     throw new RigInputError(
       "leashFall",
       rig.leashFall,
-      "fallHeightM, or both leashLengthM and harnessHeightM (the fall is leash length + harness height above the line)",
+      "a free-fall height, or both a leash length and a harness height above the line (the fall is the leash length plus the harness height)",
     );
   }
   if (leashLengthM + harnessHeightM > 100) {
