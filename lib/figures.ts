@@ -38,11 +38,11 @@ export const ropeDiameterText = (mm: number) => `${ropeDiameterDigits(mm)} mm`;
 
 /**
  * A value of the rig's input where nobody types it (a box filled from the Kit, a difference between revisions): the
- * Kit's own figures as the Kit shows them (an MBS cut down, a stretch point in whole lbf, not "449.618"), any other
- * value as a person would type it.
+ * Kit's own figures as the Kit's boxes show them (an MBS in lbf cut down, a stretch point in whole lbf, not "449.618";
+ * SI values as given), any other value as a person would type it.
  */
 export function inputFigureDigits(si: number, kind: QuantityKind, units: UnitSystem): string {
-  if (kind === "force") return capacityDigits(si, units);
+  if (kind === "force" && units === "us") return capacityDigits(si, units);
   if (kind === "stretchTension") return stretchTensionDigits(si, units);
   if (kind === "massPerLength") return massPerLengthDigits(si * 1000, units);
   return inputText(si, kind, units);

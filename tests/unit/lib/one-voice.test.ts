@@ -11,7 +11,7 @@ import {
   DEFAULT_MINIMUM_FACTORS,
   type DisplayUnits,
 } from "@/physics";
-import { specText } from "@/components/kit/spec-summary";
+import { specDigits, specText } from "@/components/kit/spec-summary";
 import { capacityInUnit, inputFigureDigits, stretchTensionText, massPerLengthText } from "@/lib/figures";
 import { forceUnitOf } from "@/physics";
 import { formatClearance, formatDepth, formatQuantity } from "@/lib/rig-form/format";
@@ -126,7 +126,9 @@ describe("one way to show a force, through every path", () => {
         // The Kit (an MBS kept in kN) and the Slip bench (a slip load as recorded, in the crew's unit).
         expect(specText("mbsKN", v / 1000, units)).toBe(capacity);
         expect(capacityInUnit(v, forceUnitOf(units))).toBe(capacity);
-        expect(inputFigureDigits(v, "force", units)).toBe(digitsOf(capacity));
+        // The planner's box filled from the Kit reads as the Kit's own box: cut down in lbf, as given in kN.
+        expect(inputFigureDigits(v, "force", units)).toBe(specDigits("mbsKN", v / 1000, units));
+        if (units === "us") expect(inputFigureDigits(v, "force", units)).toBe(digitsOf(capacity));
         // The slip table's CSV: the lowest slip's digits, unit in the header.
         const csv = slipTableCsv(
           {
