@@ -1,39 +1,27 @@
-import { fromNewtons, type ForceUnit } from "@/physics";
-import { forceDigits, formatForce } from "./force-format";
-import { toShown, type UnitSystem } from "./rig-form/quantities";
+import { capacityDigits, figureDigits, fixedDigits, forceText, forceUnitOf, type ForceUnit } from "@/physics";
+import { inputText, toShown, type QuantityKind, type UnitSystem } from "./rig-form/quantities";
 
-// How the Kit's and the Slip bench's figures read in the crew's units: one helper per kind of figure, so
-// that every page, table, chart, CSV and message shows a figure the same way (and one place changes them all).
+// How the Kit's and the Slip bench's own figures read in the crew's units. The rounding and the decimals are the
+// engine's display module's (physics/display.ts), as for every figure of the product; a load or a capacity in the
+// crew's unit is `loadText` or `capacityText` from there. These helpers only add the Kit's kinds and units.
 
-/** The force unit a crew reads: kN in SI, lbf in US units. */
-export const forceUnitOf = (units: UnitSystem): ForceUnit => (units === "us" ? "lbf" : "kN");
-
-/** A capacity (an MBS, a slip load, a held-to bound, a spread of slips), cut down at the shown precision: "4.30 kN", "966 lbf". */
-export const capacityText = (newtons: number, units: UnitSystem) => capacityInUnit(newtons, forceUnitOf(units));
-
-/** The same in a unit of its own: a force as the tester recorded it, in N, kN, lbf or kgf. */
-export const capacityInUnit = (newtons: number, unit: ForceUnit) => formatForce(newtons, unit);
-
-/** The digits of `capacityText`, without the unit: for a CSV column or an input box. */
-export const capacityDigits = (newtons: number, units: UnitSystem) => forceDigits(newtons, forceUnitOf(units));
+/** A force as the tester recorded it, in N, kN, lbf or kgf, cut down at the shown precision (a slip load is a capacity). */
+export const capacityInUnit = (newtons: number, unit: ForceUnit) => forceText(newtons, unit, "down");
 
 /** A setting given as a force (the fall that counts as a slip), to the nearest shown step: it is neither a load nor a capacity. */
-export const thresholdText = (newtons: number, units: UnitSystem) => {
-  const unit = forceUnitOf(units);
-  return `${fromNewtons(newtons, unit).toFixed(unit === "kN" ? 2 : 0)} ${unit}`;
-};
+export const thresholdText = (newtons: number, units: UnitSystem) => forceText(newtons, forceUnitOf(units), "nearest");
 
 /** A number as it was given, without binary-fraction noise: 0.1 + 0.2 reads 0.3. */
 export const asGiven = (value: number) => String(Number(value.toPrecision(6)));
 
-/** A stretch point's tension (kept in kN, as measured): kN as given, or whole lbf. */
+/** A stretch point's tension (kept in kN, as measured): kN as given, or lbf to the nearest shown step. */
 export const stretchTensionDigits = (kN: number, units: UnitSystem) =>
-  units === "us" ? String(Math.round(toShown(kN, "stretchTension", units))) : asGiven(kN);
+  units === "us" ? figureDigits(toShown(kN, "stretchTension", units), "lbf", "nearest") : asGiven(kN);
 export const stretchTensionText = (kN: number, units: UnitSystem) => `${stretchTensionDigits(kN, units)} ${units === "us" ? "lbf" : "kN"}`;
 
 /** Webbing or rope mass per length (kept in g/m): g/m as given, or oz/ft to a hundredth. */
 export const massPerLengthDigits = (gramsPerMetre: number, units: UnitSystem) =>
-  units === "us" ? toShown(gramsPerMetre / 1000, "massPerLength", units).toFixed(2) : asGiven(gramsPerMetre);
+  units === "us" ? figureDigits(toShown(gramsPerMetre / 1000, "massPerLength", units), "oz/ft", "nearest") : asGiven(gramsPerMetre);
 export const massPerLengthText = (gramsPerMetre: number, units: UnitSystem) =>
   `${massPerLengthDigits(gramsPerMetre, units)} ${units === "us" ? "oz/ft" : "g/m"}`;
 
@@ -45,5 +33,17 @@ export const efficiencyText = (fraction: number) => `${efficiencyDigits(fraction
 export const millimetresText = (mm: number) => `${asGiven(mm)} mm`;
 
 /** A rope diameter as the slip bench gives it: to a tenth of a millimetre. */
-export const ropeDiameterDigits = (mm: number) => mm.toFixed(1);
+export const ropeDiameterDigits = (mm: number) => fixedDigits(mm, 1, "nearest");
 export const ropeDiameterText = (mm: number) => `${ropeDiameterDigits(mm)} mm`;
+
+/**
+ * A value of the rig's input where nobody types it (a box filled from the Kit, a difference between revisions): the
+ * Kit's own figures as the Kit's boxes show them (an MBS in lbf cut down, a stretch point in whole lbf, not "449.618";
+ * SI values as given), any other value as a person would type it.
+ */
+export function inputFigureDigits(si: number, kind: QuantityKind, units: UnitSystem): string {
+  if (kind === "force" && units === "us") return capacityDigits(si, units);
+  if (kind === "stretchTension") return stretchTensionDigits(si, units);
+  if (kind === "massPerLength") return massPerLengthDigits(si * 1000, units);
+  return inputText(si, kind, units);
+}

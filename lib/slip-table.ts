@@ -1,5 +1,6 @@
+import { capacityDigits, forceUnitOf } from "@/physics";
 import type { SlipResult } from "@/physics";
-import { capacityDigits, forceUnitOf, ropeDiameterDigits } from "./figures";
+import { ropeDiameterDigits } from "./figures";
 import type { UnitSystem } from "./rig-form/quantities";
 import { csvText } from "./csv";
 

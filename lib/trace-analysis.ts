@@ -1,5 +1,4 @@
-import { detectSlip, ENGINE_VERSION, type ForceUnit, type SlipOnset } from "@/physics";
-import { formatForce } from "./force-format";
+import { ENGINE_VERSION, detectSlip, forceText, type ForceUnit, type SlipOnset } from "@/physics";
 import { RequestError } from "./http-errors";
 import { benchRangeIn, BENCH_FORCE_RANGE_N } from "./validations/slip-tests";
 import type { ParsedTrace } from "./trace-csv";
@@ -52,7 +51,7 @@ export function analyseTrace(trace: ParsedTrace, unit: ForceUnit, dropN: number,
   if (peak < BENCH_FORCE_RANGE_N.min || peak > BENCH_FORCE_RANGE_N.max) {
     throw new RequestError(
       422,
-      `The trace peaks at ${formatForce(peak, unit)}, outside what a slip bench measures (${benchRangeIn(unit)}): check the unit you chose.`,
+      `The trace peaks at ${forceText(peak, unit, "down")}, outside what a slip bench measures (${benchRangeIn(unit)}): check the unit you chose.`,
     );
   }
   const onset = detectSlip(trace, dropN, pullEndS);

@@ -1,5 +1,5 @@
 import { parentPort } from "node:worker_threads";
-import { evaluateRig, type ForceUnit } from "@/physics";
+import { evaluateRig, type DisplayUnits, type ForceUnit } from "@/physics";
 import { sha256Hex } from "./sha256";
 import { analyseTrace } from "./trace-analysis";
 import { parseTraceCsv } from "./trace-csv";
@@ -17,7 +17,8 @@ export interface TraceJob {
 }
 
 export const TASKS = {
-  evaluateRig: (input: unknown) => ({ result: evaluateRig(input) }),
+  /** The rig evaluated, its sentences in the crew's units (the figures are SI whatever the units). */
+  evaluateRig: (job: { input: unknown; units: DisplayUnits }) => ({ result: evaluateRig(job.input, { units: job.units }) }),
   /** Type check, hash, parse and slip detection of an uploaded trace; the bytes go back to the caller for storing. */
   analyseTrace: (job: TraceJob) => {
     const { contentType, text } = traceText(job.fileName, job.bytes);

@@ -1,3 +1,4 @@
+import { fixedDigits } from "./display";
 import type { Line } from "./line-equations";
 import { RigInputError } from "./rig-input-error";
 import type { RigInput } from "./rig-schema";
@@ -33,7 +34,7 @@ export function backupLine(rig: RigInput, mainLength: number): { name: string; l
     throw new RigInputError(
       "backup.slackM",
       b.slackM,
-      `a slack of at least ${(shortest - mainLength).toFixed(3)} m: any less and the backup alone would stretch past its MBS to reach the anchors`,
+      `a slack of at least ${fixedDigits(shortest - mainLength, 3, "up")} m: any less and the backup alone would stretch past its MBS to reach the anchors`,
     );
   }
   return { name: b.name, line, length, mbs: b.mbsN, slack: b.slackM };

@@ -1,4 +1,4 @@
-import { cutDown, roundUp } from "./display";
+import { capacityText, factorText, loadText, type DisplayUnits } from "./display";
 
 /** One result from the crew's slip bench. "held" means the test stopped without a slip: F is only a lower bound. */
 export interface SlipResult {
@@ -43,13 +43,15 @@ export function checkBrake(
   peakLineTension: number,
   brakeAdvantage: number,
   minimumMargin: number,
+  units: DisplayUnits = "si",
 ): BrakeCheck {
   const brakeForce = peakLineTension / brakeAdvantage;
   const results = bench.filter((r) => sameDevice(r.device, device) && sameDiameter(r.ropeDiameterMm, ropeDiameterMm));
   const slipped = results.filter((r) => r.result === "slipped").map((r) => r.forceN);
   const held = results.filter((r) => r.result === "held").map((r) => r.forceN);
-  const load = (f: number) => `${roundUp(f / 1000)} kN`;
-  const capacity = (f: number) => `${cutDown(f / 1000)} kN`;
+  // The sentence is in the crew's units; the figures above stay in newtons.
+  const load = (f: number) => loadText(f, units);
+  const capacity = (f: number) => capacityText(f, units);
   const base = { brakeForce, resultsUsed: results.length, minimumMargin };
   const belowMargin = (margin: number) => margin < minimumMargin;
   const belowMinimum = `below the crew's minimum of ${minimumMargin}`;
@@ -66,7 +68,7 @@ export function checkBrake(
       margin,
       highestLineTensionHeld: slipLoad * brakeAdvantage,
       message: holds
-        ? `${device} on ${ropeDiameterMm} mm holds: ${load(brakeForce)} at the brake against a lowest measured slip of ${capacity(slipLoad)} (margin ${cutDown(margin)}${thin ? `, ${belowMinimum}` : ""}).`
+        ? `${device} on ${ropeDiameterMm} mm holds: ${load(brakeForce)} at the brake against a lowest measured slip of ${capacity(slipLoad)} (margin ${factorText(margin)}${thin ? `, ${belowMinimum}` : ""}).`
         : `${device} on ${ropeDiameterMm} mm slips: ${load(brakeForce)} at the brake reaches its lowest measured slip of ${capacity(slipLoad)}.`,
     };
   }
@@ -83,7 +85,7 @@ export function checkBrake(
         lowerBoundOnly: true,
         margin,
         highestLineTensionHeld: heldTo * brakeAdvantage,
-        message: `${device} on ${ropeDiameterMm} mm held to ${capacity(heldTo)} on the bench without slipping; ${load(brakeForce)} at the brake is within that (margin at least ${cutDown(margin)}${thin ? `, ${belowMinimum}` : ""}; the slip load itself was never measured).`,
+        message: `${device} on ${ropeDiameterMm} mm held to ${capacity(heldTo)} on the bench without slipping; ${load(brakeForce)} at the brake is within that (margin at least ${factorText(margin)}${thin ? `, ${belowMinimum}` : ""}; the slip load itself was never measured).`,
       };
     }
     return {

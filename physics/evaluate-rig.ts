@@ -1,5 +1,5 @@
-import { cutDown, roundUp } from "./display";
-import { anchorLoads, type AnchorLoads } from "./bridle";
+import { forceText, forceUnitOf, lengthText, loadText, type DisplayUnits } from "./display";
+import { anchorLoads, anchorWarnings, type AnchorLoads } from "./bridle";
 import { backupCatchMissing, backupFreeFall, backupLine } from "./backup-catch";
 import { checkBrake, type BrakeCheck } from "./brake-check";
 import { CAUTIONS } from "./cautions";
@@ -137,7 +137,7 @@ function fallHeight(rig: RigInput): number {
     throw new RigInputError(
       "leashFall",
       rig.leashFall,
-      "fallHeightM, or both leashLengthM and harnessHeightM (the fall is leash length + harness height above the line)",
+      "a free-fall height, or both a leash length and a harness height above the line (the fall is the leash length plus the harness height)",
     );
   }
   if (leashLengthM + harnessHeightM > 100) {
@@ -201,7 +201,12 @@ function catchResult(c: LineCatch, lowestPointM: number | null, groundClearanceM
 }
 
 /** Evaluates a rig: tensions, sag, sweep, leash fall, pulley system, brake, anchors and safety factors. */
-export function evaluateRig(input: unknown): RigResult {
+/**
+ * Evaluates a rig. `wording.units` chooses only the units its sentences (warnings, the brake's verdict) are
+ * written in, for the crew reading them; every figure of the result stays in SI.
+ */
+export function evaluateRig(input: unknown, wording: { units: DisplayUnits } = { units: "si" }): RigResult {
+  const { units } = wording;
   const rig = parseRigInput(input);
   const warnings: string[] = [];
   const mbs = rig.mainline.mbsN;
@@ -259,7 +264,15 @@ export function evaluateRig(input: unknown): RigResult {
     rig.tensioning.pullPerPersonN,
   );
   const peakAtTensioner = rig.pretension.readAt === "a" ? peakA : peakB;
-  const brake = checkBrake(rig.brake.device, rig.brake.ropeDiameterMm, rig.slipBench, peakAtTensioner, tensioning.brakeAdvantage, rig.minimumBrakeMargin);
+  const brake = checkBrake(
+    rig.brake.device,
+    rig.brake.ropeDiameterMm,
+    rig.slipBench,
+    peakAtTensioner,
+    tensioning.brakeAdvantage,
+    rig.minimumBrakeMargin,
+    units,
+  );
 
   const anchors = {
     a: { ...anchorLoads(rig.anchors.a.layout, anchorPeakA, "anchors.a.layout"), peakTensionN: anchorPeakA },
@@ -282,10 +295,12 @@ export function evaluateRig(input: unknown): RigResult {
   ];
   const factors = safetyFactors(components, rig.minimumSafetyFactors);
 
+  // A stretch point is a measurement, neither a load nor a capacity: to the nearest shown step.
+  const measured = (newtons: number) => forceText(newtons, forceUnitOf(units), "nearest");
   const extrapolated = peakLine > line.curve.lastMeasuredTension;
   if (extrapolated) {
     warnings.push(
-      `Peak tension ${roundUp(peakLine / 1000)} kN is beyond the stretch curve's last measured point (${(line.curve.lastMeasuredTension / 1000).toFixed(2)} kN): the curve is extrapolated with its last stiffness.`,
+      `Peak tension ${loadText(peakLine, units)} is beyond the stretch curve's last measured point (${measured(line.curve.lastMeasuredTension)}): the curve is extrapolated with its last stiffness.`,
     );
   }
   for (const f of factors.filter((f) => !f.passes)) {
@@ -296,7 +311,7 @@ export function evaluateRig(input: unknown): RigResult {
   if (brake.verdict !== "holds") warnings.push(brake.message);
   if (backupCatch?.caught.extrapolated) {
     warnings.push(
-      `The backup's peak tension at the catch, ${roundUp(backupCatch.caught.maxTension / 1000)} kN, is beyond its stretch curve's last measured point (${(backup!.line.curve.lastMeasuredTension / 1000).toFixed(2)} kN): the curve is extrapolated with its last stiffness.`,
+      `The backup's peak tension at the catch, ${loadText(backupCatch.caught.maxTension, units)}, is beyond its stretch curve's last measured point (${measured(backup!.line.curve.lastMeasuredTension)}): the curve is extrapolated with its last stiffness.`,
     );
   }
 
@@ -352,17 +367,15 @@ export function evaluateRig(input: unknown): RigResult {
     if (worst && !worst.passes) {
       const gap =
         worst.clearanceM >= 0
-          ? `leaves ${cutDown(worst.clearanceM)} m between the walker's lowest point and the ground`
-          : `reaches the ground: the walker's lowest point would be ${roundUp(-worst.clearanceM)} m below it`;
-      warnings.push(`${what} at ${worst.positionM.toFixed(1)} m from A ${gap}; the crew's minimum clearance is ${clearance.minimumM} m.`);
+          ? `leaves ${lengthText(worst.clearanceM, units, "down")} between the walker's lowest point and the ground`
+          : `reaches the ground: the walker's lowest point would be ${lengthText(-worst.clearanceM, units, "up")} below it`;
+      warnings.push(
+        `${what} at ${lengthText(worst.positionM, units, "nearest")} from A ${gap}; the crew's minimum clearance is ${lengthText(clearance.minimumM, units, "nearest")}.`,
+      );
     }
   }
-  for (const side of ["a", "b"] as const) {
-    const layout = rig.anchors[side].layout;
-    if (layout.kind === "bridle" && layout.includedAngleDeg > 120) {
-      warnings.push(`Anchor ${side}: a bridle angle of ${layout.includedAngleDeg}° puts more than the line tension on each leg.`);
-    }
-  }
+  for (const side of ["a", "b"] as const)
+    warnings.push(...anchorWarnings(side, rig.anchors[side].layout, rig.anchors[side].components.length, anchors[side], units));
 
   return {
     engineVersion: ENGINE_VERSION,

@@ -35,7 +35,27 @@ export { checkGround, groundHeightAt, type GroundPoint } from "./ground";
 export { lowestClearance, monotoneCubic, RULE_OF_THUMB, DEFAULT_MINIMUM_CLEARANCE_M, type LowestClearance } from "./clearance";
 export { analysePulleySystem, checkPulleySystem, type PulleySystem, type PulleyAnalysis, type BrakeLocation } from "./pulley-system";
 export { checkBrake, type BrakeCheck, type SlipResult } from "./brake-check";
-export { anchorLoads, type AnchorLayout, type AnchorLoads } from "./bridle";
+export { anchorLoads, anchorWarnings, type AnchorLayout, type AnchorLoads } from "./bridle";
+export {
+  roundTowards,
+  atTwelveDigits,
+  decimalsOf,
+  fixedDigits,
+  figureDigits,
+  figureText,
+  forceUnitOf,
+  lengthUnitOf,
+  forceIn,
+  forceText,
+  loadText,
+  capacityText,
+  capacityDigits,
+  lengthText,
+  factorText,
+  changeText,
+  type Rounding,
+  type DisplayUnits,
+} from "./display";
 export {
   safetyFactors,
   COMPONENT_CATEGORIES,

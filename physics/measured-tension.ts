@@ -1,3 +1,4 @@
+import { fixedDigits } from "./display";
 import { bracketedRoot } from "./bracketed-root";
 import { sagAt } from "./line-profile";
 import { parseRigInput } from "./parse-rig-input";
@@ -24,7 +25,7 @@ export function tensionForSag(input: unknown, sagM: number, anchor: "a" | "b"): 
   const tightest = lengthForPretension(line, 0.999 * mbs, anchor, mbs).variables.length;
   const tightestSag = sagOf(tightest);
   if (!(sagM > tightestSag)) {
-    throw new RigInputError("sagM", sagM, `a sag above ${tightestSag.toFixed(3)} m: any less and the line would be tighter than its MBS`);
+    throw new RigInputError("sagM", sagM, `a sag above ${fixedDigits(tightestSag, 3, "up")} m: any less and the line would be tighter than its MBS`);
   }
   const chord = Math.hypot(line.span, line.rise);
   const slackest = chord + (8 * (2 * sagM) ** 2) / (3 * line.span);

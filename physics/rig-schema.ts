@@ -48,7 +48,7 @@ const anchor = z.object({
         includedAngleDeg: number("an included angle ≥ 0° and < 180°").gte(0, "an included angle ≥ 0° and < 180°").lt(180, "an included angle ≥ 0° and < 180°"),
       }),
     ],
-    { error: '{ "kind": "single" } or { "kind": "bridle", "includedAngleDeg": … }' },
+    { error: "a single anchor point, or a bridle with its included angle" },
   ),
   components: z.array(component, { error: "a list of components" }).max(20, "at most 20 components").default([]),
 });

@@ -1,4 +1,4 @@
-import { cutDown } from "./display";
+import { atTwelveDigits, factorText } from "./display";
 
 /** Kinds of component the crew sets a minimum safety factor for. */
 export const COMPONENT_CATEGORIES = ["webbing", "connector", "sling", "anchor", "other"] as const;
@@ -32,6 +32,7 @@ export function safetyFactors(components: readonly LoadedComponent[], minimums: 
   return components.map((c) => {
     const factor = c.mbs / c.peakLoad;
     const minimum = minimums[c.category];
-    return { ...c, factor, shown: cutDown(factor), minimum, passes: factor >= minimum };
+    // Read as it is shown (to 12 digits), so a factor that reads 3.00 never fails a minimum of 3, nor one that reads 2.99 pass it.
+    return { ...c, factor, shown: factorText(factor), minimum, passes: atTwelveDigits(factor) >= minimum };
   });
 }

@@ -1,7 +1,7 @@
 import type { TensionReading } from "@/db/readings";
-import { forceUnitOf } from "@/lib/figures";
+
 import type { UnitSystem } from "@/lib/rig-form/quantities";
-import { fromNewtons } from "@/physics";
+import { forceUnitOf, fromNewtons } from "@/physics";
 import { axisTicks, linearScale } from "./scale";
 
 const S = 360;

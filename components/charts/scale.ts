@@ -1,3 +1,5 @@
+import { fixedDigits } from "@/physics";
+
 /** A linear map from a data interval onto a pixel interval. */
 export function linearScale(domain: [number, number], range: [number, number]) {
   const [d0, d1] = domain;
@@ -33,8 +35,5 @@ export function axisTicks(min: number, max: number, count = 5): Tick[] {
   return ticks;
 }
 
-/** A tick's text at a fixed number of decimals; zero reads "0", never "-0" or "-0.00". */
-function tickText(value: number, decimals: number): string {
-  const text = value.toFixed(decimals);
-  return Number(text) === 0 ? (0).toFixed(decimals) : text;
-}
+/** A tick's text at a fixed number of decimals, as every figure is written (physics/display.ts); zero never reads "-0". */
+const tickText = (value: number, decimals: number) => fixedDigits(value, decimals, "nearest");

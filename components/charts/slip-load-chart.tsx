@@ -1,8 +1,8 @@
 import type { SlipTableTest } from "@/lib/slip-table";
-import { forceUnitOf, ropeDiameterDigits } from "@/lib/figures";
+import { ropeDiameterDigits } from "@/lib/figures";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import { SLIP_RESULT_WORDS } from "@/lib/validations/slip-tests";
-import { fromNewtons } from "@/physics";
+import { forceUnitOf, fromNewtons } from "@/physics";
 import { axisTicks, linearScale } from "./scale";
 
 const W = 720;

@@ -1,7 +1,7 @@
-import { capacityText, forceUnitOf, thresholdText } from "@/lib/figures";
+import { thresholdText } from "@/lib/figures";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import { slipResultText } from "@/lib/validations/slip-tests";
-import { fromNewtons } from "@/physics";
+import { capacityText, forceUnitOf, fromNewtons } from "@/physics";
 import { axisTicks, linearScale } from "./scale";
 
 interface TraceChartProps {

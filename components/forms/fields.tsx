@@ -4,6 +4,7 @@ import { useId, useState, type ChangeEvent, type ReactNode } from "react";
 import { get, useController, useFormContext, useFormState, type FieldErrors } from "react-hook-form";
 import { controlClasses, describedBy, Field, TextArea } from "@/components/ui/field";
 import { Select, type SelectOption } from "@/components/ui/select";
+import { inputFigureDigits } from "@/lib/figures";
 import { inputText, parseTyped, unitLabel, type QuantityKind } from "@/lib/rig-form/quantities";
 import { useFieldProblem, useUnits } from "./form-settings";
 
@@ -53,7 +54,7 @@ function useSuggestions(suggestions: readonly string[] | undefined): { list: str
  * A number in the crew's units, bound to the form by name. The form holds SI (what the schema and the
  * engine take); the box converts at the edge and keeps the person's own text while they type.
  */
-function useQuantityInput(name: FieldPath, kind: QuantityKind, optional: boolean) {
+function useQuantityInput(name: FieldPath, kind: QuantityKind, optional: boolean, readOnly = false) {
   const units = useUnits();
   const {
     field: { ref, onChange, onBlur, value: held },
@@ -69,7 +70,8 @@ function useQuantityInput(name: FieldPath, kind: QuantityKind, optional: boolean
     autoComplete: "off",
     name,
     ref,
-    value: typed.text,
+    // A box nobody types in (filled from the Kit) shows the figure as the Kit does; a typed one keeps the person's text.
+    value: readOnly && value !== undefined && Number.isFinite(value) ? inputFigureDigits(value, kind, units) : typed.text,
     onBlur,
     onChange: (event: ChangeEvent<HTMLInputElement>) => {
       const next = parseTyped(event.target.value, kind, units, optional);
@@ -82,7 +84,7 @@ function useQuantityInput(name: FieldPath, kind: QuantityKind, optional: boolean
 
 export function QuantityField({ name, label, kind, optional = false, hint, suggestions, readOnly }: QuantityFieldProps) {
   const { list, options } = useSuggestions(suggestions);
-  const { input, problem, unit } = useQuantityInput(name, kind, optional);
+  const { input, problem, unit } = useQuantityInput(name, kind, optional, readOnly);
   return (
     <>
       <Field label={unit ? `${label} (${unit})` : label} list={list} readOnly={readOnly} hint={hint} error={problem} {...input} />
@@ -93,7 +95,7 @@ export function QuantityField({ name, label, kind, optional = false, hint, sugge
 
 /** The same number box for a table cell: its label is the column's, read out to screen readers; its problem shows under it. */
 export function QuantityCell({ name, label, kind, readOnly }: { name: FieldPath; label: string; kind: QuantityKind; readOnly?: boolean }) {
-  const { input, problem, unit } = useQuantityInput(name, kind, false);
+  const { input, problem, unit } = useQuantityInput(name, kind, false, readOnly);
   const id = useId();
   return (
     <>

@@ -1,13 +1,5 @@
-import {
-  capacityDigits,
-  capacityText,
-  efficiencyDigits,
-  efficiencyText,
-  asGiven,
-  massPerLengthDigits,
-  massPerLengthText,
-  millimetresText,
-} from "@/lib/figures";
+import { capacityDigits, capacityText } from "@/physics";
+import { efficiencyDigits, efficiencyText, asGiven, massPerLengthDigits, massPerLengthText, millimetresText } from "@/lib/figures";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import { CONSTRUCTION_LABELS, SPEC_KEYS, keptMeasure, measureLabel, type GearKind, type GearSpecs, type MeasureKey } from "@/lib/validations/kit";
 

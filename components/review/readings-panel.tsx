@@ -1,5 +1,6 @@
 "use client";
 
+import { changeText, loadText } from "@/physics";
 import { useMemo } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm, useWatch, type Control } from "react-hook-form";
@@ -15,7 +16,7 @@ import { useQuantityText } from "@/components/forms/use-quantity-text";
 import type { TensionReading } from "@/db/readings";
 import { readingSchema, type ReadingBody } from "@/lib/validations/review";
 import { readingDifferencePercent } from "@/lib/review/reading-prediction";
-import { formatDistance, formatLoad, formatQuantity } from "@/lib/rig-form/format";
+import { formatDistance, formatQuantity } from "@/lib/rig-form/format";
 import { fromShown, inputText, unitLabel, type QuantityKind, type UnitSystem } from "@/lib/rig-form/quantities";
 import { when } from "@/lib/when";
 
@@ -38,10 +39,7 @@ export function readingConditions(r: TensionReading, units: UnitSystem): string 
     : `walker ${formatQuantity(r.walkerMassKg!, "mass", units, "up")} at ${formatDistance(r.walkerPositionM!, units)} from A`;
 }
 
-export const differenceText = (r: TensionReading) => {
-  const d = readingDifferencePercent(r.measuredN, r.predictedN);
-  return `${d > 0 ? "+" : ""}${d.toFixed(1)} %`;
-};
+export const differenceText = (r: TensionReading) => changeText(readingDifferencePercent(r.measuredN, r.predictedN));
 
 /** Load-cell readings on the signed-off revision: the form, and each reading beside the engine's prediction. */
 export function ReadingsPanel({
@@ -73,7 +71,7 @@ export function ReadingsPanel({
       const sent = await sendOrQueue({
         url,
         body: values,
-        what: `Reading of ${formatLoad(values.measuredN, units)} at anchor ${values.anchor.toUpperCase()} on ${rigName}`,
+        what: `Reading of ${loadText(values.measuredN, units)} at anchor ${values.anchor.toUpperCase()} on ${rigName}`,
         rigId,
         target: { kind: "reading", revisionId, measuredN: values.measuredN, anchor: values.anchor },
       });
@@ -163,8 +161,8 @@ export function ReadingsPanel({
                   </td>
                   <td className="py-1 pr-2">{readingConditions(r, units)}</td>
                   <td className="py-1 pr-2">anchor {r.anchor.toUpperCase()}</td>
-                  <td className="py-1 pr-2 tabular-nums whitespace-nowrap">{formatLoad(r.measuredN, units)}</td>
-                  <td className="py-1 pr-2 tabular-nums whitespace-nowrap">{formatLoad(r.predictedN, units)}</td>
+                  <td className="py-1 pr-2 tabular-nums whitespace-nowrap">{loadText(r.measuredN, units)}</td>
+                  <td className="py-1 pr-2 tabular-nums whitespace-nowrap">{loadText(r.predictedN, units)}</td>
                   <td className="py-1 tabular-nums">{differenceText(r)}</td>
                 </tr>
               ))}

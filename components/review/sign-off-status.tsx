@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { changeText } from "@/physics";
 import type { SignOff } from "@/db/reviews";
 import type { Verification } from "@/lib/review/verification";
 import type { RevisionMeta, RevisionState } from "@/lib/validations/rigs";
@@ -40,9 +41,7 @@ function Reevaluated({ verification }: { verification: Verification }) {
                 </th>
                 <td className="py-1 pr-2 tabular-nums">{m.then}</td>
                 <td className="py-1 pr-2 tabular-nums">{m.now}</td>
-                <td className="py-1 tabular-nums">
-                  {Number.isFinite(m.changePercent) ? `${m.changePercent > 0 ? "+" : ""}${m.changePercent.toFixed(2)} %` : "—"}
-                </td>
+                <td className="py-1 tabular-nums">{Number.isFinite(m.changePercent) ? changeText(m.changePercent, 2) : "—"}</td>
               </tr>
             ))}
           </tbody>

@@ -13,7 +13,7 @@ export type Evaluation =
 export function evaluatePlanner(values: unknown, catalogue: KitCatalogue, site: SiteSnapshot | null, units: UnitSystem): Evaluation {
   const { input, problems } = prepareRigInput(values, catalogue, site);
   try {
-    return { kind: "figures", input, result: evaluateRig(input), gearProblems: problems };
+    return { kind: "figures", input, result: evaluateRig(input, { units }), gearProblems: problems };
   } catch (error) {
     if (error instanceof RigInputError) {
       const problem = rigInputProblem(error, units);

@@ -1,9 +1,10 @@
 "use client";
 
+import { loadText } from "@/physics";
 import { useEffect, useLayoutEffect, useRef, useState, type KeyboardEvent } from "react";
 import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
 import type { KonvaEventObject } from "konva/lib/Node";
-import { formatDepth, formatDistance, formatLoad } from "@/lib/rig-form/format";
+import { formatDepth, formatDistance } from "@/lib/rig-form/format";
 import { verticalExaggeration } from "@/lib/rig-form/exaggeration";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { RigResult } from "@/physics";
@@ -137,10 +138,10 @@ export function LineDiagram({ result, input, units, onWalkerMove }: LineDiagramP
   const description = `Side view: span ${formatDistance(span, units)}, B ${formatDistance(end.y, units)} above A. Unloaded mid-span sag ${formatDepth(
     unloaded.midSpanSagM,
     units,
-  )}; with the walker at ${formatDistance(walker.positionM, units)} the sag is ${formatDepth(walker.sagAtWalkerM, units)}, tension at A ${formatLoad(
+  )}; with the walker at ${formatDistance(walker.positionM, units)} the sag is ${formatDepth(walker.sagAtWalkerM, units)}, tension at A ${loadText(
     walker.tensionAN,
     units,
-  )} and at B ${formatLoad(walker.tensionBN, units)}.${lowest
+  )} and at B ${loadText(walker.tensionBN, units)}.${lowest
     .map((m) => ` ${m.label} at ${formatDistance(m.positionM, units)}: the walker's lowest point at ${formatDistance(m.y, units)} relative to A.`)
     .join("")} Heights drawn ×${exaggeration}.`;
   return (
@@ -220,7 +221,7 @@ export function LineDiagram({ result, input, units, onWalkerMove }: LineDiagramP
                     y={py(a.y) - 34}
                     width={160}
                     align={a.align}
-                    text={`${a.label}: ${formatLoad(a.tension, units)}`}
+                    text={`${a.label}: ${loadText(a.tension, units)}`}
                     fontSize={15}
                     fontStyle="bold"
                     fill={INK}

@@ -1,7 +1,8 @@
 "use client";
 
+import { capacityText, factorText, loadText } from "@/physics";
 import { memo, type ReactNode } from "react";
-import { formatCapacity, formatClearance, formatDepth, formatDistance, formatLoad, truncateRatio } from "@/lib/rig-form/format";
+import { formatClearance, formatDepth, formatDistance } from "@/lib/rig-form/format";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { CatchResult, RigResult, SafetyFactor, WorstClearance } from "@/physics";
 import { Table } from "@/components/ui/table";
@@ -50,8 +51,8 @@ function SafetyFactorTable({ factors, units }: { factors: SafetyFactor[]; units:
         { key: "factor", header: "Factor", align: "right", cell: (f) => f.shown },
         { key: "verdict", header: "Result", cell: (f) => <Verdict tone={f.passes ? "ok" : "danger"}>{f.passes ? "Passes" : "Fails"}</Verdict> },
         { key: "minimum", header: "Minimum", align: "right", cell: (f) => f.minimum },
-        { key: "mbs", header: "MBS", align: "right", cell: (f) => <span className="whitespace-nowrap">{formatCapacity(f.mbs, units)}</span> },
-        { key: "peak", header: "Peak load", align: "right", cell: (f) => <span className="whitespace-nowrap">{formatLoad(f.peakLoad, units)}</span> },
+        { key: "mbs", header: "MBS", align: "right", cell: (f) => <span className="whitespace-nowrap">{capacityText(f.mbs, units)}</span> },
+        { key: "peak", header: "Peak load", align: "right", cell: (f) => <span className="whitespace-nowrap">{loadText(f.peakLoad, units)}</span> },
       ]}
     />
   );
@@ -74,9 +75,9 @@ function BackupCatchPanel({ result, units }: { result: RigResult; units: UnitSys
           <p className="text-sm text-ink-700">{c.note}</p>
           <Figures
             rows={[
-              [`Peak load on the backup at ${formatDistance(c.positionM, units)} (upper bound)`, formatLoad(c.peakLoadN, units)],
-              ["Backup tension at A (upper bound)", formatLoad(c.peakTensionAN, units)],
-              ["Backup tension at B (upper bound)", formatLoad(c.peakTensionBN, units)],
+              [`Peak load on the backup at ${formatDistance(c.positionM, units)} (upper bound)`, loadText(c.peakLoadN, units)],
+              ["Backup tension at A (upper bound)", loadText(c.peakTensionAN, units)],
+              ["Backup tension at B (upper bound)", loadText(c.peakTensionBN, units)],
               ["Free fall onto the backup", formatDepth(c.fallHeightM, units)],
               ["Backup deflection at the catch", formatDepth(c.deflectionM, units)],
               ...lowestRows(c, units),
@@ -149,18 +150,18 @@ function RigFigures({ result, units }: { result: RigResult; units: UnitSystem })
     const name = `Anchor ${side.toUpperCase()}`;
     return a.legs === 2
       ? [
-          [`${name} master point, peak`, formatLoad(a.masterPoint, units)],
-          [`${name} each bridle leg, peak`, formatLoad(a.leg, units)],
+          [`${name} master point, peak`, loadText(a.masterPoint, units)],
+          [`${name} each bridle leg, peak`, loadText(a.leg, units)],
         ]
-      : [[`${name} single point, peak`, formatLoad(a.masterPoint, units)]];
+      : [[`${name} single point, peak`, loadText(a.masterPoint, units)]];
   });
   return (
     <>
       <Panel title={`With the walker at ${formatDistance(walker.positionM, units)} from A`} id="walker-figures">
         <Figures
           rows={[
-            ["Tension at anchor A", formatLoad(walker.tensionAN, units)],
-            ["Tension at anchor B", formatLoad(walker.tensionBN, units)],
+            ["Tension at anchor A", loadText(walker.tensionAN, units)],
+            ["Tension at anchor B", loadText(walker.tensionBN, units)],
             ["Walker sag below the chord", formatDepth(walker.sagAtWalkerM, units)],
             ["Mid-span sag, nobody on the line", formatDepth(unloaded.midSpanSagM, units)],
           ]}
@@ -170,10 +171,10 @@ function RigFigures({ result, units }: { result: RigResult; units: UnitSystem })
         <p className="text-sm text-ink-700">{leashFall.note}</p>
         <Figures
           rows={[
-            ["Peak load on the line (upper bound)", formatLoad(leashFall.peakLoadN, units)],
-            ["Peak tension at A (upper bound)", formatLoad(leashFall.peakTensionAN, units)],
-            ["Peak tension at B (upper bound)", formatLoad(leashFall.peakTensionBN, units)],
-            ["Peak anchor load (upper bound)", formatLoad(leashFall.peakAnchorLoadN, units)],
+            ["Peak load on the line (upper bound)", loadText(leashFall.peakLoadN, units)],
+            ["Peak tension at A (upper bound)", loadText(leashFall.peakTensionAN, units)],
+            ["Peak tension at B (upper bound)", loadText(leashFall.peakTensionBN, units)],
+            ["Peak anchor load (upper bound)", loadText(leashFall.peakAnchorLoadN, units)],
             ["Free fall before the line takes the load", formatDepth(leashFall.fallHeightM, units)],
             ["Line deflection at the catch", formatDepth(leashFall.deflectionM, units)],
             ...lowestRows(leashFall, units),
@@ -185,10 +186,10 @@ function RigFigures({ result, units }: { result: RigResult; units: UnitSystem })
       <Panel title="Tensioning" id="tensioning-figures">
         <Figures
           rows={[
-            ["Haul force to reach the pretension", formatLoad(tensioning.haulForce, units)],
+            ["Haul force to reach the pretension", loadText(tensioning.haulForce, units)],
             ["People needed on the haul", String(tensioning.peopleNeeded)],
             ["Mechanical advantage, ideal", `${tensioning.idealAdvantage}:1`],
-            ["Mechanical advantage while hauling", `${truncateRatio(tensioning.haulingAdvantage)}:1`],
+            ["Mechanical advantage while hauling", `${factorText(tensioning.haulingAdvantage)}:1`],
           ]}
         />
       </Panel>
@@ -199,14 +200,14 @@ function RigFigures({ result, units }: { result: RigResult; units: UnitSystem })
         <p className="text-ink-800">{brake.message}</p>
         <Figures
           rows={[
-            ["Force at the brake at peak tension", formatLoad(brake.brakeForce, units)],
-            ["Margin (lowest slip ÷ force at the brake)", brake.margin === null ? "no slip results" : `${atLeast}${truncateRatio(brake.margin)}`],
+            ["Force at the brake at peak tension", loadText(brake.brakeForce, units)],
+            ["Margin (lowest slip ÷ force at the brake)", brake.margin === null ? "no slip results" : `${atLeast}${factorText(brake.margin)}`],
             ["Crew minimum margin", String(brake.minimumMargin)],
             [
               "Highest line tension the brake holds",
-              brake.highestLineTensionHeld === null ? "unknown: untested" : `${atLeast}${formatCapacity(brake.highestLineTensionHeld, units)}`,
+              brake.highestLineTensionHeld === null ? "unknown: untested" : `${atLeast}${capacityText(brake.highestLineTensionHeld, units)}`,
             ],
-            ["Peak line tension at the tensioning anchor", formatLoad(brake.peakLineTensionN, units)],
+            ["Peak line tension at the tensioning anchor", loadText(brake.peakLineTensionN, units)],
           ]}
         />
       </Panel>

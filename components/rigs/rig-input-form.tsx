@@ -6,9 +6,9 @@ import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/select";
 import { ChoiceField, GroupProblem, QuantityCell, QuantityField, TextField } from "@/components/forms/fields";
 import { useFieldProblem, useUnits } from "@/components/forms/form-settings";
-import { COMPONENT_CATEGORIES } from "@/physics";
+import { COMPONENT_CATEGORIES, capacityText } from "@/physics";
 import type { QuantityKind } from "@/lib/rig-form/quantities";
-import { formatCapacity, formatDistance } from "@/lib/rig-form/format";
+import { formatDistance } from "@/lib/rig-form/format";
 import { kindOf, labelOf } from "@/lib/planner/fields";
 import { PICK_KINDS, prepareRigInput, type KitModel } from "@/lib/planner/kit";
 import { valueAt } from "@/lib/planner/differences";
@@ -44,7 +44,8 @@ const Pair = ({ children }: { children: ReactNode }) => <div className="grid gap
 
 /** A number field labelled and converted by the one table of the rig's inputs. */
 function Quantity({ name, optional, hint, readOnly }: { name: string; optional?: boolean; hint?: ReactNode; readOnly?: boolean }) {
-  return <QuantityField name={name} label={labelOf(name)} kind={kindOf(name) as QuantityKind} optional={optional} hint={hint} readOnly={readOnly} />;
+  const units = useUnits();
+  return <QuantityField name={name} label={labelOf(name, units)} kind={kindOf(name) as QuantityKind} optional={optional} hint={hint} readOnly={readOnly} />;
 }
 
 /** Which Kit model a field names, kept up to date as the form changes. */
@@ -380,7 +381,7 @@ function BenchResults({ device }: { device: KitModel }) {
           <tr key={t.id} className="border-b border-ink-100">
             <td className="py-1 pr-2 tabular-nums">{t.ropeDiameterMm}</td>
             <td className="py-1 pr-2">{SLIP_RESULT_LABELS[t.result]}</td>
-            <td className="py-1 tabular-nums">{formatCapacity(t.forceN, units)}</td>
+            <td className="py-1 tabular-nums">{capacityText(t.forceN, units)}</td>
           </tr>
         ))}
       </tbody>

@@ -1,4 +1,5 @@
-import { formatClearance, formatDepth, formatDistance, formatLoad, truncateRatio } from "@/lib/rig-form/format";
+import { factorText, loadText } from "@/physics";
+import { formatClearance, formatDepth, formatDistance } from "@/lib/rig-form/format";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { RigResult, SafetyFactor } from "@/physics";
 import { classNames } from "@/lib/class-names";
@@ -42,21 +43,21 @@ function headlines(result: RigResult, units: UnitSystem): Headline[] {
   const lowest = lowestFactor(safetyFactors);
   const brakeWord = BRAKE_VERDICTS[brake.verdict];
   return [
-    { label: "Worst walking tension", value: formatLoad(worstWalking, units) },
+    { label: "Worst walking tension", value: loadText(worstWalking, units) },
     { label: "Deepest walker sag", value: formatDepth(sweep.deepestSag.sag, units) },
     {
       label: `Walker at ${formatDistance(walker.positionM, units)}: tension A / B`,
-      value: `${formatLoad(walker.tensionAN, units)} / ${formatLoad(walker.tensionBN, units)}`,
+      value: `${loadText(walker.tensionAN, units)} / ${loadText(walker.tensionBN, units)}`,
     },
     { label: `Walker at ${formatDistance(walker.positionM, units)}: sag`, value: formatDepth(walker.sagAtWalkerM, units) },
-    { label: "Leash-fall peak at an anchor (upper bound)", value: formatLoad(leashFall.peakAnchorLoadN, units) },
+    { label: "Leash-fall peak at an anchor (upper bound)", value: loadText(leashFall.peakAnchorLoadN, units) },
     clearanceHeadline(result, units),
     lowest
       ? { label: "Lowest safety factor", value: `${lowest.shown} (min ${lowest.minimum}), ${lowest.name}`, tone: lowest.passes ? "ok" : "danger" }
       : { label: "Lowest safety factor", value: "no components" },
     {
       label: "Brake",
-      value: brake.margin === null ? brakeWord.word : `${brakeWord.word}, margin ${brake.lowerBoundOnly ? "at least " : ""}${truncateRatio(brake.margin)}`,
+      value: brake.margin === null ? brakeWord.word : `${brakeWord.word}, margin ${brake.lowerBoundOnly ? "at least " : ""}${factorText(brake.margin)}`,
       tone: brakeWord.tone,
     },
   ];

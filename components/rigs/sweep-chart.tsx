@@ -1,4 +1,5 @@
-import { formatDepth, formatDistance, formatLoad } from "@/lib/rig-form/format";
+import { loadText } from "@/physics";
+import { formatDepth, formatDistance } from "@/lib/rig-form/format";
 import { fromShown, toShown, unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
 import type { Sweep, SweepPoint } from "@/physics";
 import { axisTicks, linearScale } from "@/components/charts/scale";
@@ -95,14 +96,14 @@ export function SweepChart({ sweep, units, walkerX }: { sweep: Sweep; units: Uni
       label: "A",
       value: (p) => p.tensionA,
       worst: sweep.worstTensionA,
-      worstText: `Highest at A: ${formatLoad(sweep.worstTensionA.tensionA, units)}, walker at ${at(sweep.worstTensionA)} (solid)`,
+      worstText: `Highest at A: ${loadText(sweep.worstTensionA.tensionA, units)}, walker at ${at(sweep.worstTensionA)} (solid)`,
     },
     {
       label: "B",
       value: (p) => p.tensionB,
       dash: "8 5",
       worst: sweep.worstTensionB,
-      worstText: `Highest at B: ${formatLoad(sweep.worstTensionB.tensionB, units)}, walker at ${at(sweep.worstTensionB)} (dashed)`,
+      worstText: `Highest at B: ${loadText(sweep.worstTensionB.tensionB, units)}, walker at ${at(sweep.worstTensionB)} (dashed)`,
     },
   ];
   const sag: Series[] = [

@@ -1,7 +1,8 @@
+import { capacityText } from "@/physics";
 import Link from "next/link";
 import { ScrollFrame } from "@/components/ui/scroll-frame";
 import { cellKey, type SlipTable } from "@/lib/slip-table";
-import { capacityText, ropeDiameterText } from "@/lib/figures";
+import { ropeDiameterDigits, ropeDiameterText } from "@/lib/figures";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 
 /**
@@ -44,7 +45,7 @@ export function SlipTableMatrix({
               </th>
               {table.diameters.map((d) => {
                 const cell = cells.get(cellKey(device.id, d));
-                const name = `${device.name} ${d.toFixed(1)}`;
+                const name = `${device.name} ${ropeDiameterDigits(d)}`;
                 if (!cell) {
                   return (
                     <td key={d} className="whitespace-nowrap px-4 py-3 text-right text-ink-600" data-cell={name}>

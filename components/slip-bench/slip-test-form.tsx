@@ -1,5 +1,6 @@
 "use client";
 
+import { capacityText, forceIn, forceUnitOf } from "@/physics";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { asNumber } from "@/components/forms/as-number";
@@ -11,8 +12,7 @@ import { Field, FieldFrame, controlClasses } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { useToast } from "@/components/ui/toast";
 import { TraceChart } from "@/components/charts/trace-chart";
-import { forceIn } from "@/lib/force-format";
-import { capacityText, forceUnitOf } from "@/lib/figures";
+
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { TraceAnalysis } from "@/lib/trace-analysis";
 import {
@@ -83,7 +83,7 @@ export function SlipTestForm({ devices, ropes, units }: { devices: DeviceOption[
     setValue("traceUploadId", (answer.body.upload as { id: string }).id, filled);
     setValue("result", found.onset.kind, filled);
     setValue("forceUnit", found.unit, filled);
-    setValue("force", forceIn(found.onset.forceN, found.unit), filled);
+    setValue("force", forceIn(found.onset.forceN, found.unit, "down"), filled);
   }
 
   return (

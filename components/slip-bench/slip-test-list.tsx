@@ -1,9 +1,10 @@
 "use client";
 
+import { capacityText } from "@/physics";
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/empty-state";
 import { SortableTable } from "@/components/ui/sortable-table";
-import { capacityText, ropeDiameterText } from "@/lib/figures";
+import { ropeDiameterText } from "@/lib/figures";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import { slipResultText } from "@/lib/validations/slip-tests";
 import { isCorrection } from "@/lib/slip-table";

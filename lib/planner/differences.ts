@@ -1,4 +1,5 @@
-import { inputText, unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
+import { inputFigureDigits } from "@/lib/figures";
+import { unitLabel, type UnitSystem } from "@/lib/rig-form/quantities";
 import { kindOf, labelOf } from "./fields";
 import { SLIP_RESULT_WORDS } from "@/lib/validations/slip-tests";
 
@@ -73,7 +74,7 @@ export function shownValue(path: string, value: Json, units: UnitSystem, modelNa
   if (typeof value === "number") {
     if (kind === "text" || kind === "choice" || kind === "list") return String(value);
     const unit = unitLabel(kind, units);
-    return `${inputText(value, kind, units)}${unit ? ` ${unit}` : ""}`;
+    return `${inputFigureDigits(value, kind, units)}${unit ? ` ${unit}` : ""}`;
   }
   if (Array.isArray(value)) return `${value.length} ${value.length === 1 ? "entry" : "entries"}`;
   if (isObject(value)) return Object.keys(value).length ? "given" : "—";
@@ -84,7 +85,7 @@ export function shownValue(path: string, value: Json, units: UnitSystem, modelNa
 export function inputDifferences(before: Json, after: Json, units: UnitSystem, modelName: (id: string) => string | undefined): InputDifference[] {
   return differingPaths(before, after).map((path) => ({
     path,
-    label: labelOf(path),
+    label: labelOf(path, units),
     before: shownValue(path, valueAt(before, path), units, modelName),
     after: shownValue(path, valueAt(after, path), units, modelName),
   }));

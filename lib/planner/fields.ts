@@ -1,4 +1,4 @@
-import type { QuantityKind } from "@/lib/rig-form/quantities";
+import type { QuantityKind, UnitSystem } from "@/lib/rig-form/quantities";
 
 // Every input of a rig by its path in the engine's input, with the words the planner's form labels it
 // by and what kind of quantity it holds. Form labels, error messages, revision differences and the 409
@@ -8,19 +8,21 @@ export type FieldKind = QuantityKind | "text" | "choice" | "list" | "pick" | "fl
 
 interface FieldEntry {
   pattern: RegExp;
-  label: (match: string[]) => string;
+  label: (match: string[], units: UnitSystem) => string;
   kind: FieldKind;
 }
 
 const side = (letter: string) => `Anchor ${letter.toUpperCase()}`;
 const ordinal = (i: number) => String(i + 1);
 
-function line(prefix: "mainline" | "backup", title: string): [RegExp, (m: string[]) => string, FieldKind][] {
+type Row = [RegExp, (m: string[], units: UnitSystem) => string, FieldKind];
+
+function line(prefix: "mainline" | "backup", title: string): Row[] {
   return [
     [new RegExp(`^${prefix}$`), () => title, "list"],
     [new RegExp(`^${prefix}\\.modelId$`), () => `${title} from the Kit`, "pick"],
     [new RegExp(`^${prefix}\\.name$`), () => `${title} webbing`, "text"],
-    [new RegExp(`^${prefix}\\.massPerMetreKg$`), () => `${title} mass per metre`, "massPerLength"],
+    [new RegExp(`^${prefix}\\.massPerMetreKg$`), (_m, units) => `${title} mass per ${units === "us" ? "foot" : "metre"}`, "massPerLength"],
     [new RegExp(`^${prefix}\\.mbsN$`), () => `${title} MBS`, "force"],
     [new RegExp(`^${prefix}\\.stretchPoints$`), () => `${title} stretch points`, "list"],
     [new RegExp(`^${prefix}\\.stretchPoints\\.(\\d+)$`), (m) => `${title} stretch point ${ordinal(+m[1])}`, "list"],
@@ -29,7 +31,7 @@ function line(prefix: "mainline" | "backup", title: string): [RegExp, (m: string
   ];
 }
 
-const TABLE: [RegExp, (m: string[]) => string, FieldKind][] = [
+const TABLE: Row[] = [
   [/^name$/, () => "Rig name", "text"],
   [/^spanM$/, () => "Horizontal span A to B", "length"],
   [/^heightDifferenceM$/, () => "Height of B above A", "length"],
@@ -99,12 +101,15 @@ function entryOf(path: string): { entry: FieldEntry; match: string[] } | null {
   return null;
 }
 
-/** The words the form labels a field by, for any path into the rig's input; the nearest labelled group for an unlisted one. */
-export function labelOf(path: string): string {
+/**
+ * The words the form labels a field by, for any path into the rig's input; the nearest labelled group for an unlisted
+ * one. Only a mass per length is named by its units ("per foot" in oz/ft); every other label reads alike in both.
+ */
+export function labelOf(path: string, units: UnitSystem = "si"): string {
   const parts = path.split(".");
   for (let n = parts.length; n > 0; n--) {
     const found = entryOf(parts.slice(0, n).join("."));
-    if (found) return found.entry.label(found.match);
+    if (found) return found.entry.label(found.match, units);
   }
   return "The rig's input";
 }

@@ -17,7 +17,7 @@ export function rigInputProblem(error: RigInputError, units: UnitSystem): { fiel
     kind === "pick" || kind === "text" || kind === "choice" || kind === "list" || kind === "flag" ? "plain" : kind,
     units,
   );
-  return { field: error.field, allowed, sentence: `${labelOf(error.field)}: allowed is ${allowed}.` };
+  return { field: error.field, allowed, sentence: `${labelOf(error.field, units)}: allowed is ${allowed}.` };
 }
 
 /** A 400 for an input the engine refused, naming the field as the form labels it. */

@@ -1,5 +1,5 @@
-import { RigInputError, SolveError, tensionForSag, tensionWithWalker } from "@/physics";
-import { formatCapacity, formatDistance } from "@/lib/rig-form/format";
+import { RigInputError, SolveError, capacityText, tensionForSag, tensionWithWalker } from "@/physics";
+import { formatDistance } from "@/lib/rig-form/format";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import type { ReadingBody } from "@/lib/validations/review";
 
@@ -19,7 +19,7 @@ export function predictReading(inputs: Record<string, unknown>, reading: Reading
     return {
       kind: "refused",
       field: "measuredN",
-      message: `Tension read: at or above the mainline's MBS (${formatCapacity(line.mainline.mbsN, units)}), the line would have failed; check the load cell's unit and reading.`,
+      message: `Tension read: at or above the mainline's MBS (${capacityText(line.mainline.mbsN, units)}), the line would have failed; check the load cell's unit and reading.`,
     };
   }
   if (reading.kind === "walker" && !(reading.walkerPositionM < line.spanM)) {

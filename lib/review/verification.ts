@@ -1,5 +1,5 @@
-import { evaluateRig, RigInputError, SolveError, ENGINE_VERSION, type RigResult } from "@/physics";
-import { formatDepth, formatLoad, truncateRatio } from "@/lib/rig-form/format";
+import { ENGINE_VERSION, RigInputError, SolveError, evaluateRig, factorText, loadText, type RigResult } from "@/physics";
+import { formatDepth } from "@/lib/rig-form/format";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import { contentHash, type SignedContent } from "./content-hash";
 
@@ -12,7 +12,7 @@ interface Figure {
   shown: (value: number, units: UnitSystem) => string;
 }
 
-const load = (label: string, value: Figure["value"]): Figure => ({ label, value, shown: formatLoad });
+const load = (label: string, value: Figure["value"]): Figure => ({ label, value, shown: loadText });
 
 const HEADLINE_FIGURES: Figure[] = [
   load("Pretension at anchor A", (r) => r.unloaded.tensionAN),
@@ -25,14 +25,14 @@ const HEADLINE_FIGURES: Figure[] = [
   load("Peak tension at anchor A", (r) => r.anchors.a.peakTensionN),
   load("Peak tension at anchor B", (r) => r.anchors.b.peakTensionN),
   load("Force on the brake at peak tension", (r) => r.brake.brakeForce),
-  { label: "Brake margin", value: (r) => r.brake.margin, shown: (v) => truncateRatio(v) },
+  { label: "Brake margin", value: (r) => r.brake.margin, shown: (v) => factorText(v) },
 ];
 
 /** Every figure compared: the headline ones and each component's safety factor, matched by name and place. */
 function figuresOf(result: RigResult): Figure[] {
   const factors = result.safetyFactors.map((f, i): Figure => {
     const place = f.location === "line" ? "line" : `anchor ${f.location.toUpperCase()}`;
-    return { label: `Safety factor of ${f.name} (${place})`, value: (r) => r.safetyFactors[i]?.factor ?? null, shown: (v) => truncateRatio(v) };
+    return { label: `Safety factor of ${f.name} (${place})`, value: (r) => r.safetyFactors[i]?.factor ?? null, shown: (v) => factorText(v) };
   });
   return [...HEADLINE_FIGURES, ...factors];
 }

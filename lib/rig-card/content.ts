@@ -1,9 +1,9 @@
-import { parseRigInput, type RigResult, type SafetyFactor } from "@/physics";
+import { capacityText, factorText, loadText, parseRigInput, type RigResult, type SafetyFactor } from "@/physics";
 import type { Revision } from "@/db/rigs";
 import type { SignOff } from "@/db/reviews";
 import { BRAKE_VERDICTS } from "@/components/rigs/verdict-words";
 import { efficiencyText, ropeDiameterText, asGiven } from "@/lib/figures";
-import { formatCapacity, formatDepth, formatDistance, formatLoad, formatQuantity, truncateRatio } from "@/lib/rig-form/format";
+import { formatDepth, formatDistance, formatQuantity } from "@/lib/rig-form/format";
 import type { UnitSystem } from "@/lib/rig-form/quantities";
 import { REVISION_STATE_LABELS } from "@/lib/validations/rigs";
 
@@ -198,8 +198,8 @@ export function rigCardContent(source: RigCardSource): RigCardContent {
     backup === undefined || backup === null
       ? [{ label: "Backup catch", value: backup === null && later.backupMissing ? later.backupMissing : "not computed" }]
       : [
-          { label: "Backup-catch peak load on the backup (upper bound)", value: formatLoad(backup.peakLoadN, units) },
-          { label: "Backup-catch peak anchor load (upper bound)", value: formatLoad(backup.peakAnchorLoadN, units) },
+          { label: "Backup-catch peak load on the backup (upper bound)", value: loadText(backup.peakLoadN, units) },
+          { label: "Backup-catch peak anchor load (upper bound)", value: loadText(backup.peakAnchorLoadN, units) },
           { label: "Ground clearance after a backup catch", value: clearanceText(backup, later.groundGiven, units) },
         ];
 
@@ -209,10 +209,10 @@ export function rigCardContent(source: RigCardSource): RigCardContent {
     const layout = input.anchors[side].layout;
     return layout.kind === "bridle"
       ? [
-          { label: `${name} master point, peak`, value: formatLoad(a.masterPoint, units) },
-          { label: `${name} each bridle leg (${asGiven(layout.includedAngleDeg)}° bridle), peak`, value: formatLoad(a.leg, units) },
+          { label: `${name} master point, peak`, value: loadText(a.masterPoint, units) },
+          { label: `${name} each bridle leg (${asGiven(layout.includedAngleDeg)}° bridle), peak`, value: loadText(a.leg, units) },
         ]
-      : [{ label: `${name} single point, peak`, value: formatLoad(a.masterPoint, units) }];
+      : [{ label: `${name} single point, peak`, value: loadText(a.masterPoint, units) }];
   });
 
   const brakeOn = input.tensioning.brake.on === "tail" ? "on the crew's tail" : `on the tail of stage ${input.tensioning.brake.stage + 1}`;
@@ -246,7 +246,7 @@ export function rigCardContent(source: RigCardSource): RigCardContent {
         { label: "Backup", value: input.backup ? `${input.backup.name}${input.backup.ridesAlong ? ", rides along" : ""}` : "none given" },
         {
           label: "Pretension target, nobody on the line",
-          value: `${formatLoad(input.pretension.forceN, units)} at anchor ${input.pretension.readAt.toUpperCase()}`,
+          value: `${loadText(input.pretension.forceN, units)} at anchor ${input.pretension.readAt.toUpperCase()}`,
         },
         { label: "Mid-span sag, nobody on the line", value: formatDepth(unloaded.midSpanSagM, units) },
       ],
@@ -254,9 +254,9 @@ export function rigCardContent(source: RigCardSource): RigCardContent {
     {
       title: "Walking",
       rows: [
-        { label: "Worst walking tension", value: formatLoad(worstWalking, units) },
+        { label: "Worst walking tension", value: loadText(worstWalking, units) },
         { label: "Deepest walker sag", value: formatDepth(sweep.deepestSag.sag, units) },
-        { label: `${atWalker}: tension A / B`, value: `${formatLoad(walker.tensionAN, units)} / ${formatLoad(walker.tensionBN, units)}` },
+        { label: `${atWalker}: tension A / B`, value: `${loadText(walker.tensionAN, units)} / ${loadText(walker.tensionBN, units)}` },
         { label: "Walker's mass", value: formatQuantity(input.walker.massKg, "mass", units, "up") },
       ],
     },
@@ -264,8 +264,8 @@ export function rigCardContent(source: RigCardSource): RigCardContent {
       title: "Falls",
       note: "Upper bounds: no damping and no give in leash or harness.",
       rows: [
-        { label: "Leash-fall peak load on the line (upper bound)", value: formatLoad(later.leashFall.peakLoadN, units) },
-        { label: "Leash-fall peak anchor load (upper bound)", value: formatLoad(later.leashFall.peakAnchorLoadN, units) },
+        { label: "Leash-fall peak load on the line (upper bound)", value: loadText(later.leashFall.peakLoadN, units) },
+        { label: "Leash-fall peak anchor load (upper bound)", value: loadText(later.leashFall.peakAnchorLoadN, units) },
         { label: "Free fall before the line takes the load", value: formatDepth(later.leashFall.fallHeightM, units) },
         { label: "Ground clearance after a leash fall", value: clearanceText(later.leashFall, later.groundGiven, units) },
         ...backupRows,
@@ -279,16 +279,16 @@ export function rigCardContent(source: RigCardSource): RigCardContent {
         { label: "Pulley system", value: `${stagesText(input.tensioning.stages)}; sheaves ${efficiencyText(input.tensioning.sheaveEfficiency)}` },
         {
           label: "Mechanical advantage, ideal / while hauling",
-          value: `${tensioning.idealAdvantage}:1 / ${truncateRatio(tensioning.haulingAdvantage)}:1`,
+          value: `${tensioning.idealAdvantage}:1 / ${factorText(tensioning.haulingAdvantage)}:1`,
         },
-        { label: "Haul force to reach the pretension", value: `${formatLoad(tensioning.haulForce, units)}, ${tensioning.peopleNeeded} on the haul` },
+        { label: "Haul force to reach the pretension", value: `${loadText(tensioning.haulForce, units)}, ${tensioning.peopleNeeded} on the haul` },
         { label: "Brake", value: `${input.brake.device} on ${ropeDiameterText(input.brake.ropeDiameterMm)} rope, ${brakeOn}` },
         { label: "Brake check", value: brakeWord, alert: brake.verdict !== "holds" },
-        { label: "Force at the brake at peak tension", value: formatLoad(brake.brakeForce, units) },
-        { label: "Margin (lowest slip ÷ force at the brake)", value: brake.margin === null ? "no slip results" : `${atLeast}${truncateRatio(brake.margin)}` },
+        { label: "Force at the brake at peak tension", value: loadText(brake.brakeForce, units) },
+        { label: "Margin (lowest slip ÷ force at the brake)", value: brake.margin === null ? "no slip results" : `${atLeast}${factorText(brake.margin)}` },
         {
           label: "Highest line tension the brake holds",
-          value: brake.highestLineTensionHeld === null ? "unknown: untested" : `${atLeast}${formatCapacity(brake.highestLineTensionHeld, units)}`,
+          value: brake.highestLineTensionHeld === null ? "unknown: untested" : `${atLeast}${capacityText(brake.highestLineTensionHeld, units)}`,
           alert: brake.highestLineTensionHeld === null,
         },
       ],
@@ -301,8 +301,8 @@ export function rigCardContent(source: RigCardSource): RigCardContent {
     factor: f.shown,
     minimum: String(f.minimum),
     result: f.passes ? "Passes" : "Fails",
-    mbs: formatCapacity(f.mbs, units),
-    peakLoad: formatLoad(f.peakLoad, units),
+    mbs: capacityText(f.mbs, units),
+    peakLoad: loadText(f.peakLoad, units),
   }));
 
   const author = revision.authorName ? ` by ${revision.authorName}` : "";

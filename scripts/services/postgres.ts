@@ -1,7 +1,7 @@
 import fs from "node:fs";
 import path from "node:path";
-import crypto from "node:crypto";
 import pg from "pg";
+import { sha256Hex } from "../../lib/sha256";
 import { aptInstall } from "./apt";
 import { assertPortFree, portVariable } from "./ports";
 import type { Profile } from "./stack";
@@ -71,7 +71,7 @@ function clusterDir(projectDir: string, profile: Profile): string {
   const inside = path.join(projectDir, ".data", profile, "pg");
   fs.mkdirSync(inside, { recursive: true });
   if (serverUserCanWrite(inside)) return inside;
-  const tag = crypto.createHash("sha256").update(projectDir).digest("hex").slice(0, 10);
+  const tag = sha256Hex(projectDir).slice(0, 10);
   const outside = path.join("/var/lib/postgresql", `spanwright-${path.basename(projectDir)}-${tag}`, profile);
   fs.mkdirSync(outside, { recursive: true });
   runCaptured("chown", ["-R", "postgres:postgres", path.dirname(outside)]);

@@ -8,6 +8,19 @@ const WIDTHS = [
   { name: "phone", width: 390, height: 844 },
 ] as const;
 
+const CREW_SETTINGS = {
+  minSafetyFactors: { webbing: 3, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: 3 },
+  minClearanceM: 2,
+  allowSelfSignOff: false,
+};
+/** Sets the demo crew's units through the settings route (an owner's or lead's session). */
+const setCrewUnits = (page: Page, units: "si" | "us") =>
+  page.evaluate(
+    (body) =>
+      fetch("/api/crew/settings", { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(body) }).then((r) => r.status),
+    { units, ...CREW_SETTINGS },
+  );
+
 const shot = (page: Page, name: string, width: string) => page.screenshot({ path: `.data/test/playwright/screens/${name}-${width}.png`, fullPage: true });
 
 for (const size of WIDTHS) {
@@ -89,17 +102,7 @@ for (const size of WIDTHS) {
       await shot(page, "share-link", size.name);
       await page.getByRole("button", { name: "Revoke the link" }).click();
 
-      const settings = {
-        minSafetyFactors: { webbing: 3, rope: 3, anchor: 3, connector: 3, sling: 3, pulley: 3, brake: 3 },
-        minClearanceM: 2,
-        allowSelfSignOff: false,
-      };
-      const setUnits = (units: "si" | "us") =>
-        page.evaluate(
-          (body) =>
-            fetch("/api/crew/settings", { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(body) }).then((r) => r.status),
-          { units, ...settings },
-        );
+      const setUnits = (units: "si" | "us") => setCrewUnits(page, units);
       expect(await setUnits("us")).toBe(200);
       try {
         await page.goto("/kit");
@@ -123,6 +126,28 @@ for (const size of WIDTHS) {
         await shot(page, "slip-bench-us", size.name);
       } finally {
         expect(await setUnits("si")).toBe(200);
+      }
+    });
+
+    test("a lead: a rig in US units, its brake sentence, warnings, Kit-filled boxes and labels in the crew's units", async ({ page }) => {
+      await signInAs(page, "lead", "/rigs");
+      expect(await setCrewUnits(page, "us")).toBe(200);
+      try {
+        await page.getByRole("link", { name: "Corvid Gorge highline" }).first().click();
+        const brake = page.getByRole("region", { name: "Brake" });
+        await expect(brake).toContainText("lbf at the brake");
+        await expect(brake).not.toContainText("kN");
+        await expect(page.locator("#warnings")).not.toContainText(/\d kN|\d m\b/);
+        const details = page.locator("details").filter({ has: page.locator("summary", { hasText: /^Mainline/ }) });
+        if ((await details.getAttribute("open")) === null) await details.locator("summary").click();
+        await expect(page.getByLabel("Mainline mass per foot (oz/ft)")).toBeVisible();
+        // Boxes filled from the Kit read as the Kit does: whole lbf (NIST SP 811: 1 lbf = 4.448 221 615 260 5 N), never 449.618.
+        for (const box of await page.getByLabel(/^Mainline stretch point \d+ tension \(lbf\)$/).all()) await expect(box).toHaveValue(/^\d+$/);
+        await shot(page, "rig-us", size.name);
+        await details.screenshot({ path: `.data/test/playwright/screens/rig-us-mainline-${size.name}.png` });
+        await brake.screenshot({ path: `.data/test/playwright/screens/rig-us-brake-${size.name}.png` });
+      } finally {
+        expect(await setCrewUnits(page, "si")).toBe(200);
       }
     });
   });

@@ -1,3 +1,4 @@
+import { forceUnitOf } from "@/physics";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PageHeader } from "@/components/page-header";
@@ -12,7 +13,7 @@ import { PublishLink } from "@/components/slip-bench/publish-link";
 import { authorizePage } from "@/lib/authz";
 import { can } from "@/lib/roles";
 import { buildSlipTable } from "@/lib/slip-table";
-import { forceUnitOf, ropeDiameterText } from "@/lib/figures";
+import { ropeDiameterText } from "@/lib/figures";
 import { isUuid } from "@/lib/validations/ids";
 import { listSlipTests, slipTableLinkOf } from "@/db/slip-tests";
 

@@ -1,6 +1,7 @@
+import { capacityDigits, capacityText } from "@/physics";
 import { describe, expect, it } from "vitest";
 import { unit } from "mathjs";
-import { capacityDigits, capacityText, efficiencyText, massPerLengthText, stretchTensionText, thresholdText } from "@/lib/figures";
+import { efficiencyText, massPerLengthText, stretchTensionText, thresholdText } from "@/lib/figures";
 import { specDigits, specText } from "@/components/kit/spec-summary";
 
 // Reference conversions: mathjs units (a general-purpose library from the registry, on the NIST SP 811 definitions).

@@ -2,10 +2,10 @@ import fs from "node:fs";
 import { describe, expect, it } from "vitest";
 import { unit } from "mathjs";
 import example from "@/physics/examples/quarry-highline.json";
-import { CAUTIONS, evaluateRig, type RigResult } from "@/physics";
+import { CAUTIONS, capacityText, evaluateRig, loadText, type RigResult } from "@/physics";
 import { rigCardContent, type RigCardContent, type RigCardSource } from "@/lib/rig-card/content";
 import { drawableText, isDrawn } from "@/lib/rig-card/glyphs";
-import { formatCapacity, formatDepth, formatDistance, formatLoad, formatQuantity } from "@/lib/rig-form/format";
+import { formatDepth, formatDistance, formatQuantity } from "@/lib/rig-form/format";
 
 const result = evaluateRig(example);
 const revision = {
@@ -72,11 +72,11 @@ describe("the rig card's content", () => {
   it("gives the planner page's figures in SI units, through its formatters", () => {
     const rows = rowsOf(card());
     expect(rows["Pretension target, nobody on the line"]).toBe("3.50 kN at anchor B");
-    expect(rows["Worst walking tension"]).toBe(formatLoad(Math.max(result.sweep.worstTensionA.tensionA, result.sweep.worstTensionB.tensionB), "si"));
+    expect(rows["Worst walking tension"]).toBe(loadText(Math.max(result.sweep.worstTensionA.tensionA, result.sweep.worstTensionB.tensionB), "si"));
     expect(rows["Deepest walker sag"]).toBe(formatDepth(result.sweep.deepestSag.sag, "si"));
-    expect(rows["Leash-fall peak anchor load (upper bound)"]).toBe(formatLoad(result.leashFall.peakAnchorLoadN, "si"));
-    expect(rows["Anchor A each bridle leg (60° bridle), peak"]).toBe(formatLoad(result.anchors.a.leg, "si"));
-    expect(rows["Highest line tension the brake holds"]).toBe(formatCapacity(result.brake.highestLineTensionHeld!, "si"));
+    expect(rows["Leash-fall peak anchor load (upper bound)"]).toBe(loadText(result.leashFall.peakAnchorLoadN, "si"));
+    expect(rows["Anchor A each bridle leg (60° bridle), peak"]).toBe(loadText(result.anchors.a.leg, "si"));
+    expect(rows["Highest line tension the brake holds"]).toBe(capacityText(result.brake.highestLineTensionHeld!, "si"));
     expect(rows["Pulley system"]).toBe("3:1 on 2:1, compound; sheaves 92 %");
     expect(rows["Mechanical advantage, ideal / while hauling"]).toMatch(/^6:1 \/ \d\.\d\d:1$/);
     // A 60° bridle puts T / (2 cos 30°) = 0.577 T on each leg (sling-angle tables of rigging practice).
@@ -90,11 +90,11 @@ describe("the rig card's content", () => {
     expect(rows["Pretension target, nobody on the line"]).toBe("787 lbf at anchor B");
     // 120 m = 393.7 ft (1 ft = 0.3048 m exactly, NIST SP 811).
     expect(rows["Span"]).toBe(`${unit(120, "m").toNumber("ft").toFixed(1)} ft`);
-    expect(rows["Worst walking tension"]).toBe(formatLoad(Math.max(result.sweep.worstTensionA.tensionA, result.sweep.worstTensionB.tensionB), "us"));
+    expect(rows["Worst walking tension"]).toBe(loadText(Math.max(result.sweep.worstTensionA.tensionA, result.sweep.worstTensionB.tensionB), "us"));
     const components = card({ units: "us" }).components;
     expect(components).toHaveLength(result.safetyFactors.length);
     result.safetyFactors.forEach((f, i) => {
-      expect(components[i]).toMatchObject({ name: f.name, factor: f.shown, mbs: formatCapacity(f.mbs, "us"), peakLoad: formatLoad(f.peakLoad, "us") });
+      expect(components[i]).toMatchObject({ name: f.name, factor: f.shown, mbs: capacityText(f.mbs, "us"), peakLoad: loadText(f.peakLoad, "us") });
       expect(components[i].result).toBe(f.passes ? "Passes" : "Fails");
     });
   });

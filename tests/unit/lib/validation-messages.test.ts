@@ -6,6 +6,9 @@ import * as crew from "@/lib/validations/crew";
 import * as kit from "@/lib/validations/kit";
 import * as slip from "@/lib/validations/slip-tests";
 import { fieldErrorsOf, invalidInput } from "@/lib/http-errors";
+import { rigInputProblem } from "@/lib/planner/problems";
+import example from "@/physics/examples/quarry-highline.json";
+import { evaluateRig, RigInputError } from "@/physics";
 
 // Every message a schema gives is read by a person beside the field it names: it names the field as the form
 // labels it, says what is allowed, and never falls back to the library's own words, a field path or a raw value.
@@ -201,6 +204,57 @@ describe("other forms' messages", () => {
     const badFields = account.SignUpSchema.safeParse({ name: "", email: "not-mail", password: "short" });
     expect(badFields.success ? null : invalidInput(badFields.error).message).toBe(
       "Nothing was saved. Enter your name. That is not an e-mail address: use the form name@example.org. Use at least 10 characters.",
+    );
+  });
+});
+
+describe("the engine's refusals as the planner shows them", () => {
+  // Every field of a worked rig given every bad value, and the engine's own cross-field refusals; the sentence beside
+  // the field names it as the form labels it, in the crew's units, never by its path, an SI amount or the library's words.
+  const PATH = /\b[a-z]+(\.[a-z]+|\.\d+)*\.[a-z]+[A-Z]\w*|[a-z]+[A-Z][a-z]+(M|N|Kg|KN|Mm|Deg|Fraction|Pct|Id)\b/;
+  const SI_AMOUNT = /\d ?(N|kN|m|kg|kg\/m)(?![A-Za-z/])/;
+  const refusalOf = (input: unknown) => {
+    try {
+      evaluateRig(input);
+    } catch (error) {
+      if (error instanceof RigInputError) return error;
+    }
+    return null;
+  };
+  const cases: unknown[] = [];
+  for (const path of pathsOf(example)) {
+    for (const bad of BAD_VALUES) {
+      const body = structuredClone(example) as Record<string, unknown>;
+      const keys = path.split(".");
+      let node = body;
+      for (const key of keys.slice(0, -1)) node = node[key] as Record<string, unknown>;
+      node[keys[keys.length - 1]] = bad;
+      cases.push(body);
+    }
+  }
+  // Refusals that compare two fields: a height difference beyond the span, a pretension at the MBS, a fall at an anchor.
+  cases.push({ ...example, heightDifferenceM: example.spanM + 1 });
+  cases.push({ ...example, pretension: { ...example.pretension, forceN: example.mainline.mbsN } });
+  cases.push({ ...example, leashFall: { ...example.leashFall, positionFraction: 0 } });
+
+  for (const units of ["si", "us"] as const) {
+    it(`${units.toUpperCase()}: every refusal in the form's words`, () => {
+      const refusals = cases.map(refusalOf).filter((e): e is RigInputError => e !== null);
+      expect(refusals.length).toBeGreaterThan(100);
+      const bad = refusals
+        .map((e) => rigInputProblem(e, units).sentence)
+        .filter((s) => LIBRARY_WORDS.test(s) || RAW.test(s) || PATH.test(s) || (units === "us" && SI_AMOUNT.test(s)));
+      expect([...new Set(bad)]).toEqual([]);
+    });
+  }
+
+  it("says what is allowed in the crew's units (hand-worked: 0.5 of a 200 m span is 100 m = 328.084 ft, 1 ft = 0.3048 m, NIST SP 811)", () => {
+    const error = refusalOf({ ...example, heightDifferenceM: example.spanM + 1 })!;
+    expect(rigInputProblem(error, "si").sentence).toBe(
+      `Height of B above A: allowed is a height difference no larger than the span (|h| ≤ ${example.spanM} m).`,
+    );
+    expect(rigInputProblem(error, "us").sentence).toMatch(
+      /^Height of B above A: allowed is a height difference no larger than the span \(\|h\| ≤ [\d.]+ ft\)\.$/,
     );
   });
 });

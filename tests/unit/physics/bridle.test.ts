@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { anchorLoads, RigInputError } from "../../../physics";
+import example from "@/physics/examples/quarry-highline.json";
+import { anchorLoads, anchorWarnings, evaluateRig, RigInputError } from "../../../physics";
 
 describe("anchorLoads", () => {
   it.each([
@@ -21,5 +22,35 @@ describe("anchorLoads", () => {
 
   it("rejects an angle of 180° or more", () => {
     expect(() => anchorLoads({ kind: "bridle", includedAngleDeg: 180 }, 1)).toThrow(RigInputError);
+  });
+});
+
+// Leg load of a symmetric two-leg bridle: F / (2 cos(α/2)) (statics, resolving the master point's forces).
+describe("anchor warnings", () => {
+  const loadsAt = (angle: number) => anchorLoads({ kind: "bridle", includedAngleDeg: angle }, 10_000);
+  it("says nothing of a bridle up to 90°, where each leg takes 0.71 of the line tension", () => {
+    expect(loadsAt(90).leg / 10_000).toBeCloseTo(1 / Math.SQRT2, 12);
+    expect(anchorWarnings("a", { kind: "bridle", includedAngleDeg: 90 }, 2, loadsAt(90), "si")).toEqual([]);
+  });
+  it("cautions past 90°, with the load on each leg (100°: 10 kN / (2 cos 50°) = 7.78 kN, 78 %, hand-worked)", () => {
+    const [warning] = anchorWarnings("b", { kind: "bridle", includedAngleDeg: 100 }, 2, loadsAt(100), "si");
+    expect(warning).toBe(
+      "Anchor b: a bridle angle of 100° puts 7.78 kN on each leg (78 % of the line tension); past 90° the load on each leg climbs steeply, to the whole line tension at 120°.",
+    );
+  });
+  it("warns past 120°, where each leg takes more than the line tension (150°: 10 kN / (2 cos 75°) = 19.32 kN, hand-worked)", () => {
+    const [warning] = anchorWarnings("a", { kind: "bridle", includedAngleDeg: 150 }, 2, loadsAt(150), "us");
+    // 19 318.5 N ÷ 4.448 221 615 260 5 N/lbf = 4342.99 lbf, rounded up (NIST SP 811).
+    expect(warning).toBe("Anchor a: a bridle angle of 150° puts more than the line tension on each leg, 4343 lbf on each leg (194 % of the line tension).");
+  });
+  it("warns of an anchor with no component in its load path", () => {
+    const warnings = anchorWarnings("a", { kind: "single" }, 0, anchorLoads({ kind: "single" }, 10_000), "si");
+    expect(warnings).toHaveLength(1);
+    expect(warnings[0]).toMatch(/^Anchor a has no component in its load path/);
+  });
+  it("reaches the engine's warnings", () => {
+    const bare = structuredClone(example) as typeof example;
+    (bare.anchors.b as { components: unknown[] }).components = [];
+    expect(evaluateRig(bare).warnings.some((w) => w.startsWith("Anchor b has no component in its load path"))).toBe(true);
   });
 });

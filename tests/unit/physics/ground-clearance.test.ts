@@ -123,7 +123,7 @@ describe("the lowest clearance over the span", () => {
   it("is compared with the crew's minimum and warned about", () => {
     expect(r.clearance.minimumM).toBe(2);
     expect(r.clearance.leashFall!.passes).toBe(r.clearance.leashFall!.clearanceM >= 2);
-    expect(r.warnings.some((w) => w.includes("the crew's minimum clearance is 2 m"))).toBe(!r.clearance.leashFall!.passes);
+    expect(r.warnings.some((w) => w.includes("the crew's minimum clearance is 2.00 m"))).toBe(!r.clearance.leashFall!.passes);
   });
 
   it("interpolates between exact catches without overshoot (Fritsch & Carlson 1980: monotone data stay monotone)", () => {

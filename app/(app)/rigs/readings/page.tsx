@@ -1,3 +1,4 @@
+import { fixedDigits, loadText } from "@/physics";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PageHeader } from "@/components/page-header";
@@ -6,7 +7,7 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { ReadingsChart } from "@/components/charts/readings-chart";
 import { authorizePage } from "@/lib/authz";
 import { readingDifferencePercent } from "@/lib/review/reading-prediction";
-import { formatLoad } from "@/lib/rig-form/format";
+
 import { crewReadings, type TensionReading } from "@/db/readings";
 
 export const metadata: Metadata = { title: "Measured tension" };
@@ -37,9 +38,9 @@ export default async function ReadingsPage() {
               <Panel key={mainline} title={mainline}>
                 <ReadingsChart mainline={mainline} readings={own} units={units} />
                 <p className="text-sm">
-                  {own.length} {own.length === 1 ? "reading" : "readings"}; measured {mean >= 0 ? "above" : "below"} predicted by {Math.abs(mean).toFixed(1)} %
-                  on average, over {rigCount} {rigCount === 1 ? "rig" : "rigs"}. Highest reading {formatLoad(highest.measuredN, units)}, on{" "}
-                  <Link href={`/rigs/${highest.rigId}`}>{highest.rigName}</Link>.
+                  {own.length} {own.length === 1 ? "reading" : "readings"}; measured {mean >= 0 ? "above" : "below"} predicted by{" "}
+                  {fixedDigits(Math.abs(mean), 1, "nearest")} % on average, over {rigCount} {rigCount === 1 ? "rig" : "rigs"}. Highest reading{" "}
+                  {loadText(highest.measuredN, units)}, on <Link href={`/rigs/${highest.rigId}`}>{highest.rigName}</Link>.
                 </p>
               </Panel>
             );

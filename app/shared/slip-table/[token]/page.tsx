@@ -1,10 +1,11 @@
+import { forceUnitOf } from "@/physics";
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { Caution } from "@/components/caution-notice";
 import { SlipLoadChart } from "@/components/charts/slip-load-chart";
 import { SlipTableMatrix } from "@/components/slip-bench/slip-table-matrix";
 import { buildSlipTable } from "@/lib/slip-table";
-import { forceUnitOf } from "@/lib/figures";
+
 import { hashToken } from "@/lib/tokens";
 import { crewOfSlipTableLink, listSlipTests } from "@/db/slip-tests";
 

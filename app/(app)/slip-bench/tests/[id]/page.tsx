@@ -1,9 +1,10 @@
+import { capacityText, forceUnitOf } from "@/physics";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PageHeader } from "@/components/page-header";
 import { TraceChart } from "@/components/charts/trace-chart";
 import { authorizePage, crewRowOrNotFound } from "@/lib/authz";
-import { capacityInUnit, capacityText, forceUnitOf, ropeDiameterText, thresholdText } from "@/lib/figures";
+import { capacityInUnit, ropeDiameterText, thresholdText } from "@/lib/figures";
 import { slipResultText } from "@/lib/validations/slip-tests";
 import { isCorrection } from "@/lib/slip-table";
 import type { TraceAnalysis } from "@/lib/trace-analysis";
