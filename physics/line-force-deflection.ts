@@ -8,6 +8,8 @@ export interface LoadPathState {
   u: number;
   load: number;
   work: number;
+  /** dP/du at u when known, N/m: it lets the energy balance take Halley steps (it never changes the root). */
+  stiffness?: number;
 }
 
 /** The line's force–deflection curve at one horizontal position. */
@@ -124,7 +126,9 @@ export function lineForceDeflection(
     let released = 0;
     for (let i = 0; i < 4; i++) for (let j = 0; j < 4; j++) released += nodes[i].jump * CORRECTION[i][j] * nodes[j].variables.loadArc;
     const end = nodes[3];
-    return { u, load: end.variables.load, work: end.energy - base.energy - released };
+    // dP/du at u from the cubic through the four states (the four-point backward difference).
+    const stiffness = (11 * end.variables.load - 18 * nodes[2].variables.load + 9 * nodes[1].variables.load) / (2 * u);
+    return { u, load: end.variables.load, work: end.energy - base.energy - released, stiffness };
   };
   const variablesAt = (u: number) => solved(u).variables;
   return { unloadedY: unloaded.loadY, unloaded: unloaded.variables, load, state, variablesAt };
