@@ -1,5 +1,5 @@
 import { lineEquations, VARIABLE_NAMES, type Line, type LineEquation, type LineVariables, type VariableName } from "./line-equations";
-import { newtonSolve, type NewtonSystem } from "./newton";
+import { newtonSolve, solveLinear, type NewtonSystem } from "./newton";
 
 /**
  * The chosen conditions as a Newton system in the chosen unknowns, both scaled to order one. A class rather
@@ -59,15 +59,31 @@ class ScaledEquilibrium implements NewtonSystem {
     return { residual, jacobian: scaled };
   }
 
+  /** Each residual is (value − target) / row scale, so d(scaled unknowns)/d(target k) = J⁻¹·e_k / row scale k. */
+  sensitivity(jacobian: number[][], k: number, unknowns: readonly VariableName[]): Sensitivity | undefined {
+    const unit = this.rowScales.map((scale, i) => (i === k ? 1 / scale : 0));
+    const dx = solveLinear(jacobian, unit);
+    if (dx === null) return undefined;
+    const result: Sensitivity = {};
+    for (let i = 0; i < unknowns.length; i++) result[unknowns[i]] = dx[i] * this.scales[i];
+    return result;
+  }
+
   isValid(x: number[]) {
     const v = this.variables(x);
     return v.H > 0 && v.length > 0 && v.load >= 0;
   }
 }
 
+/** How the solution moves as one condition's target moves, in real units: d(unknown)/d(target), by unknown. */
+export type Sensitivity = Partial<Record<VariableName, number>>;
+
 /**
  * Solves the chosen conditions for the chosen unknowns (as many of each), the other variables held
  * at their start values. Unknowns and residuals are scaled to order one so one tolerance fits all.
+ * With `sensitivityOf` (an index into `equations`) it also returns how the solution moves with that
+ * condition's target (the implicit function theorem on the Jacobian at the root): a next solve along a path
+ * of such targets can start from the tangent.
  */
 export function solveEquilibrium(
   line: Line,
@@ -75,8 +91,11 @@ export function solveEquilibrium(
   unknowns: readonly VariableName[],
   equations: readonly LineEquation[],
   what: string,
-): { variables: LineVariables; iterations: number } {
+  sensitivityOf?: number,
+): { variables: LineVariables; iterations: number; sensitivity?: Sensitivity } {
   const system = new ScaledEquilibrium(line, start, unknowns, equations);
-  const { x, iterations } = newtonSolve(system, system.startVector(), { what });
-  return { variables: system.variables(x), iterations };
+  const { x, iterations, jacobian } = newtonSolve(system, system.startVector(), { what });
+  const variables = system.variables(x);
+  if (sensitivityOf === undefined) return { variables, iterations };
+  return { variables, iterations, sensitivity: system.sensitivity(jacobian, sensitivityOf, unknowns) };
 }

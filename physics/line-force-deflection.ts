@@ -58,13 +58,7 @@ const CORRECTION = BASIS.map((li) =>
  * states at u/3, 2u/3 and u; checked against a dense quadrature of P(u) in the tests.
  * Solutions already found are reused as starting points; they never change the answer.
  */
-export function lineForceDeflection(
-  line: Line,
-  length: number,
-  x: number,
-  breakingStrength: number,
-  start?: { unloaded: LineVariables; loaded: LineVariables },
-): LineForceDeflection {
+export function lineForceDeflection(line: Line, length: number, x: number, breakingStrength: number, start?: { unloaded: LineVariables }): LineForceDeflection {
   const unloaded = solveLine(line, length, { force: 0, x }, breakingStrength, start?.unloaded);
   const energyOf = (v: LineVariables) => {
     const e = lineEnergy(line, v);
@@ -74,48 +68,52 @@ export function lineForceDeflection(
     const { Vm, Vp } = segmentEnds(line, v);
     return kinkPotential(line.curve, Math.hypot(v.H, Vm)) - kinkPotential(line.curve, Math.hypot(v.H, Vp));
   };
-  const base = { variables: unloaded.variables, energy: energyOf(unloaded.variables), jump: 0 };
-  const known = new Map<number, { variables: LineVariables; energy: number; jump: number }>([[0, base]]);
-  // The first solve starts from a loaded state of a neighbouring position when given, later ones from the nearest solved deflection.
-  const seed: LineVariables = start ? start.loaded : { ...unloaded.variables, load: 1e-3 * Math.max(unloaded.variables.H, 1) };
-  // A new state starts from the line through the two solved states nearest in deflection (the first from
-  // the seed): about one Newton step fewer than starting from the nearest alone.
-  const predicted = (u: number): LineVariables => {
-    let first: [number, LineVariables] | undefined;
-    let second: [number, LineVariables] | undefined;
-    for (const [k, s] of known) {
-      if (k === 0) continue;
-      if (!first || Math.abs(k - u) < Math.abs(first[0] - u)) {
-        second = first;
-        first = [k, s.variables];
-      } else if (!second || Math.abs(k - u) < Math.abs(second[0] - u)) second = [k, s.variables];
-    }
-    if (!first) return seed;
-    if (!second) return first[1];
-    const [u1, a] = first;
-    const [u2, b] = second;
-    const t = (u - u1) / (u2 - u1);
-    const guess = {
-      ...a,
-      H: a.H + t * (b.H - a.H),
-      VA: a.VA + t * (b.VA - a.VA),
-      loadArc: a.loadArc + t * (b.loadArc - a.loadArc),
-      load: a.load + t * (b.load - a.load),
-    };
-    return guess.H > 0 && guess.load >= 0 && guess.loadArc > 0 && guess.loadArc < length ? guess : a;
-  };
   const condition = (u: number): LineEquation => ({ kind: "loadY", y: unloaded.loadY - u });
+  const equations = (u: number): LineEquation[] => [{ kind: "span" }, { kind: "rise" }, { kind: "loadX", x }, condition(u)];
+  // Every solved state keeps its tangent along the path, dv/du (the loadY target is y₀ − u: minus its sensitivity).
+  const solveAt = (u: number, guess: LineVariables) => {
+    const { variables, sensitivity: d } = solveEquilibrium(line, guess, UNKNOWNS, equations(u), "line force–deflection", 3);
+    const tangent = d && { H: -d.H!, VA: -d.VA!, loadArc: -d.loadArc!, load: -d.load! };
+    return { variables, tangent, energy: energyOf(variables), jump: jumpOf(variables) };
+  };
+  type Solved = ReturnType<typeof solveAt>;
+  // The unloaded state is on the path too (u = 0, no load, no jump): solved again with the four unknowns for its tangent.
+  const base: Solved = solveAt(0, unloaded.variables);
+  const known = new Map<number, Solved>([[0, base]]);
+  // A new state starts from the cubic Hermite through the solved states on either side of it (value and
+  // tangent), or from the tangent of the nearest when none lies beyond: a Newton step or two fewer.
+  const predicted = (u: number): LineVariables => {
+    let below: [number, Solved] | undefined;
+    let above: [number, Solved] | undefined;
+    for (const entry of known) {
+      const k = entry[0];
+      if (k <= u && (!below || k > below[0])) below = entry;
+      if (k > u && (!above || k < above[0])) above = entry;
+    }
+    const [ua, a] = below ?? above!;
+    if (!a.tangent) return a.variables;
+    const guess = { ...a.variables };
+    const keys = ["H", "VA", "loadArc", "load"] as const;
+    if (below && above && above[1].tangent) {
+      const [ub, b] = above;
+      const h = ub - ua;
+      const t = (u - ua) / h;
+      const t2 = t * t;
+      const t3 = t2 * t;
+      for (const key of keys) {
+        guess[key] =
+          (2 * t3 - 3 * t2 + 1) * a.variables[key] +
+          (t3 - 2 * t2 + t) * h * a.tangent[key] +
+          (3 * t2 - 2 * t3) * b.variables[key] +
+          (t3 - t2) * h * b.tangent![key];
+      }
+    } else for (const key of keys) guess[key] = a.variables[key] + (u - ua) * a.tangent[key];
+    return guess.H > 0 && guess.load >= 0 && guess.loadArc > 0 && guess.loadArc < length ? guess : a.variables;
+  };
   const solved = (u: number) => {
     const found = known.get(u);
     if (found) return found;
-    const variables = solveEquilibrium(
-      line,
-      predicted(u),
-      UNKNOWNS,
-      [{ kind: "span" }, { kind: "rise" }, { kind: "loadX", x }, condition(u)],
-      "line force–deflection",
-    ).variables;
-    const s = { variables, energy: energyOf(variables), jump: jumpOf(variables) };
+    const s = solveAt(u, predicted(u));
     known.set(u, s);
     return s;
   };
