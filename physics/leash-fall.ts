@@ -25,13 +25,11 @@ export function leashFallPeak(mass: number, fallHeight: number, stateAt: (u: num
   const weight = mass * STANDARD_GRAVITY;
   const imbalance = (s: LoadPathState) => s.work - weight * (fallHeight + s.u);
   // d(imbalance)/dδ = P(δ) − m·g and the imbalance is convex (P grows with u): Newton from above closes in
-  // monotonically; from below, the trial at most doubles. Two refinements, neither of which moves the root:
-  // the slope is taken from the last two trials when close (the secant, plus half the curvature times their gap), which is
-  // the slope of the work as computed (P − m·g only to the accuracy of the released-energy rule, so Newton on it
-  // closes in only linearly near an anchor); and with the stiffness dP/du (the curvature) the step is Halley's.
+  // monotonically; from below, the trial at most doubles. When the load path gives them, the step uses the
+  // slope of the work as computed (equal to P only to the accuracy of its released-energy rule, which near an
+  // anchor would leave Newton closing in linearly) and the stiffness dP/du, for Halley's cubic convergence.
   let lo: LoadPathState = { u: 0, load: 0, work: 0 };
   let hi: LoadPathState | undefined;
-  let previous: { u: number; r: number } | undefined;
   let current = stateAt(guess !== undefined && guess > 0 ? guess : Math.max(fallHeight, 0.05));
   for (let iteration = 0; iteration < 200; iteration++) {
     const r = imbalance(current);
@@ -40,15 +38,8 @@ export function leashFallPeak(mass: number, fallHeight: number, stateAt: (u: num
     if (Math.abs(r) <= 1e-9 * weight * (fallHeight + current.u) || (hi && hi.u - lo.u <= 1e-10 * hi.u)) {
       return { peakLoad: current.load, deflection: current.u, energyIn: weight * (fallHeight + current.u), energyStored: current.work };
     }
+    const slope = (current.slope ?? current.load) - weight;
     const curvature = current.stiffness;
-    let slope = current.load - weight;
-    const gap = previous ? current.u - previous.u : 0;
-    // Over a wide gap (the doubling from below) the neighbouring trial says less than P − m·g does.
-    if (previous && curvature !== undefined && gap !== 0 && Math.abs(gap) <= 0.05 * current.u) {
-      const secant = (r - previous.r) / gap + (curvature * gap) / 2;
-      if (secant > 0) slope = secant;
-    }
-    previous = { u: current.u, r };
     let next = slope > 0 ? current.u - r / slope : 2 * current.u;
     // Halley: the Newton step divided by 1 − r·r''/(2r'²), only while that factor stays near one.
     const halley = slope > 0 && curvature !== undefined ? 1 - (r * curvature) / (2 * slope * slope) : 0;

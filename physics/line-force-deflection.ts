@@ -1,6 +1,7 @@
 import { solveEquilibrium } from "./equilibrium";
-import { segmentEnds, type Line, type LineEquation, type LineVariables } from "./line-equations";
+import { type Line, type LineEquation, type LineVariables } from "./line-equations";
 import { kinkPotential, lineEnergy } from "./line-energy";
+import { strainAt } from "./stretch-curve";
 import { solveLine } from "./solve-line";
 
 /** A state on the load path at one position: deflection u (m), the load P(u) (N) and the work ∫₀^u P du (J). */
@@ -8,7 +9,9 @@ export interface LoadPathState {
   u: number;
   load: number;
   work: number;
-  /** dP/du at u when known, N/m: it lets the energy balance take Halley steps (it never changes the root). */
+  /** dW/du of the work as computed (P itself, to the accuracy of the released-energy rule), and dP/du, when
+   * known: the energy balance's Newton and Halley steps use them (they never change the root). */
+  slope?: number;
   stiffness?: number;
 }
 
@@ -26,6 +29,8 @@ export interface LineForceDeflection {
 }
 
 const UNKNOWNS = ["H", "VA", "loadArc", "load"] as const;
+/** dv/du along the load path, for the four unknowns. */
+type Tangent = Record<(typeof UNKNOWNS)[number], number>;
 
 /** Lagrange basis on the nodes 0, 1/3, 2/3, 1, as power coefficients. */
 const NODES = [0, 1 / 3, 2 / 3, 1];
@@ -64,9 +69,18 @@ export function lineForceDeflection(line: Line, length: number, x: number, break
     const e = lineEnergy(line, v);
     return e.strain + e.gravity;
   };
-  const jumpOf = (v: LineVariables) => {
-    const { Vm, Vp } = segmentEnds(line, v);
-    return kinkPotential(line.curve, Math.hypot(v.H, Vm)) - kinkPotential(line.curve, Math.hypot(v.H, Vp));
+  // ΔG across the load, and how fast it changes along the path: dG/dT = −(1 + ε(T)), since de/dT = T·dε/dT.
+  const jumpOf = (v: LineVariables, tangent: Tangent | undefined) => {
+    const Vm = v.VA + line.weight * v.loadArc;
+    const Vp = Vm + v.load;
+    const Tm = Math.hypot(v.H, Vm);
+    const Tp = Math.hypot(v.H, Vp);
+    const jump = kinkPotential(line.curve, Tm) - kinkPotential(line.curve, Tp);
+    if (!tangent) return { jump, jumpRate: undefined };
+    const dVm = tangent.VA + line.weight * tangent.loadArc;
+    const dTm = (v.H * tangent.H + Vm * dVm) / Tm;
+    const dTp = (v.H * tangent.H + Vp * (dVm + tangent.load)) / Tp;
+    return { jump, jumpRate: -(1 + strainAt(line.curve, Tm)) * dTm + (1 + strainAt(line.curve, Tp)) * dTp };
   };
   const condition = (u: number): LineEquation => ({ kind: "loadY", y: unloaded.loadY - u });
   const equations = (u: number): LineEquation[] => [{ kind: "span" }, { kind: "rise" }, { kind: "loadX", x }, condition(u)];
@@ -74,7 +88,7 @@ export function lineForceDeflection(line: Line, length: number, x: number, break
   const solveAt = (u: number, guess: LineVariables) => {
     const { variables, sensitivity: d } = solveEquilibrium(line, guess, UNKNOWNS, equations(u), "line force–deflection", 3);
     const tangent = d && { H: -d.H!, VA: -d.VA!, loadArc: -d.loadArc!, load: -d.load! };
-    return { variables, tangent, energy: energyOf(variables), jump: jumpOf(variables) };
+    return { variables, tangent, energy: energyOf(variables), ...jumpOf(variables, tangent) };
   };
   type Solved = ReturnType<typeof solveAt>;
   // The unloaded state is on the path too (u = 0, no load, no jump): solved again with the four unknowns for its tangent.
@@ -121,12 +135,23 @@ export function lineForceDeflection(line: Line, length: number, x: number, break
   const state = (u: number): LoadPathState => {
     if (u === 0) return { u, load: 0, work: 0 };
     const nodes = NODES.map((t) => (t === 0 ? base : solved(t * u)));
+    // The released energy by the cubic rule, and its exact derivative in u (each node sits at t·u), so the
+    // energy balance's Newton steps follow the work as computed: dW/du = P + ΔG·ds_P/du − d(released)/du.
     let released = 0;
-    for (let i = 0; i < 4; i++) for (let j = 0; j < 4; j++) released += nodes[i].jump * CORRECTION[i][j] * nodes[j].variables.loadArc;
+    let releasedRate = 0;
+    for (let i = 0; i < 4; i++) {
+      for (let j = 0; j < 4; j++) {
+        const a = nodes[i];
+        const b = nodes[j];
+        released += a.jump * CORRECTION[i][j] * b.variables.loadArc;
+        releasedRate += CORRECTION[i][j] * (NODES[i] * (a.jumpRate ?? NaN) * b.variables.loadArc + a.jump * NODES[j] * (b.tangent?.loadArc ?? NaN));
+      }
+    }
     const end = nodes[3];
-    // dP/du at u from the cubic through the four states (the four-point backward difference).
-    const stiffness = (11 * end.variables.load - 18 * nodes[2].variables.load + 9 * nodes[1].variables.load) / (2 * u);
-    return { u, load: end.variables.load, work: end.energy - base.energy - released, stiffness };
+    const work = end.energy - base.energy - released;
+    // Without a tangent somewhere (a singular Jacobian) the rate is NaN and the energy balance steps on P alone.
+    if (!end.tangent || !Number.isFinite(releasedRate)) return { u, load: end.variables.load, work };
+    return { u, load: end.variables.load, work, slope: end.variables.load + end.jump * end.tangent.loadArc - releasedRate, stiffness: end.tangent.load };
   };
   const variablesAt = (u: number) => solved(u).variables;
   return { unloadedY: unloaded.loadY, unloaded: unloaded.variables, load, state, variablesAt };
