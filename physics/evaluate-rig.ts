@@ -249,7 +249,8 @@ export function evaluateRig(input: unknown, wording: { units: DisplayUnits } = {
         return { catch: c, main: mainlineY.variables };
       }
     : null;
-  const backupCatch = backupAt ? backupAt(fallX).catch : null;
+  const backupAtFall = backupAt ? backupAt(fallX) : null;
+  const backupCatch = backupAtFall?.catch ?? null;
 
   const peakA = Math.max(sweep.worstTensionA.tensionA, leashCatch.caught.tensionA, unloaded.tensionA);
   const peakB = Math.max(sweep.worstTensionB.tensionB, leashCatch.caught.tensionB, unloaded.tensionB);
@@ -341,7 +342,8 @@ export function evaluateRig(input: unknown, wording: { units: DisplayUnits } = {
     minimumM: rig.minimumClearanceM,
     leashFall: canClear
       ? worst((x) => {
-          const c = leashFallAt(x, leashHints.nearest(x));
+          // The search may come back to the fall position itself: that catch is already worked out.
+          const c = x === fallX ? leashCatch : leashFallAt(x, leashHints.nearest(x));
           leashHints.add(x, c.hint);
           return lowestPoint(c)!;
         })
@@ -349,7 +351,7 @@ export function evaluateRig(input: unknown, wording: { units: DisplayUnits } = {
     backupCatch:
       canClear && backupAt
         ? worst((x) => {
-            const c = backupAt(x, backupHints.nearest(x));
+            const c = x === fallX ? backupAtFall! : backupAt(x, backupHints.nearest(x));
             backupHints.add(x, { main: c.main, catch: c.catch.hint });
             return lowestPoint(c.catch)!;
           })

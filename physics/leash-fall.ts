@@ -25,7 +25,9 @@ export function leashFallPeak(mass: number, fallHeight: number, stateAt: (u: num
   const weight = mass * STANDARD_GRAVITY;
   const imbalance = (s: LoadPathState) => s.work - weight * (fallHeight + s.u);
   // d(imbalance)/dδ = P(δ) − m·g and the imbalance is convex (P grows with u): Newton from above closes in
-  // monotonically; from below, the trial at most doubles.
+  // monotonically; from below, the trial at most doubles. When the load path gives them, the step uses the
+  // slope of the work as computed (equal to P only to the accuracy of its released-energy rule, which near an
+  // anchor would leave Newton closing in linearly) and the stiffness dP/du, for Halley's cubic convergence.
   let lo: LoadPathState = { u: 0, load: 0, work: 0 };
   let hi: LoadPathState | undefined;
   let current = stateAt(guess !== undefined && guess > 0 ? guess : Math.max(fallHeight, 0.05));
@@ -33,11 +35,15 @@ export function leashFallPeak(mass: number, fallHeight: number, stateAt: (u: num
     const r = imbalance(current);
     if (r > 0) hi = current;
     else lo = current;
-    if (hi && (Math.abs(r) <= 1e-9 * weight * (fallHeight + current.u) || hi.u - lo.u <= 1e-10 * hi.u)) {
+    if (Math.abs(r) <= 1e-9 * weight * (fallHeight + current.u) || (hi && hi.u - lo.u <= 1e-10 * hi.u)) {
       return { peakLoad: current.load, deflection: current.u, energyIn: weight * (fallHeight + current.u), energyStored: current.work };
     }
-    const slope = current.load - weight;
+    const slope = (current.slope ?? current.load) - weight;
+    const curvature = current.stiffness;
     let next = slope > 0 ? current.u - r / slope : 2 * current.u;
+    // Halley: the Newton step divided by 1 − r·r''/(2r'²), only while that factor stays near one.
+    const halley = slope > 0 && curvature !== undefined ? 1 - (r * curvature) / (2 * slope * slope) : 0;
+    if (halley > 0.5 && halley < 2) next = current.u - r / slope / halley;
     if (hi && !(next > lo.u && next < hi.u)) next = (lo.u + hi.u) / 2;
     // Below the root a Newton step where P barely exceeds m·g would shoot far past it: at most double.
     if (!hi && !(next > lo.u && next <= 2 * current.u)) next = 2 * current.u;

@@ -7,7 +7,6 @@ import { describeEquilibrium, type LineSolution } from "./solve-line";
 export interface CatchHint {
   x: number;
   unloaded: LineVariables;
-  loaded: LineVariables;
   deflection: number;
 }
 
@@ -50,6 +49,6 @@ export function catchOnLine(
     fallHeight: freeFall,
     unloadedY: forceDeflection.unloadedY,
     caught: describeEquilibrium(line, loaded, 0),
-    hint: { x, unloaded: forceDeflection.unloaded, loaded, deflection: peak.deflection },
+    hint: { x, unloaded: forceDeflection.unloaded, deflection: peak.deflection },
   };
 }

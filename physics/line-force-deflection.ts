@@ -1,6 +1,7 @@
 import { solveEquilibrium } from "./equilibrium";
-import { segmentEnds, type Line, type LineEquation, type LineVariables } from "./line-equations";
+import { type Line, type LineEquation, type LineVariables } from "./line-equations";
 import { kinkPotential, lineEnergy } from "./line-energy";
+import { strainAt } from "./stretch-curve";
 import { solveLine } from "./solve-line";
 
 /** A state on the load path at one position: deflection u (m), the load P(u) (N) and the work ∫₀^u P du (J). */
@@ -8,6 +9,10 @@ export interface LoadPathState {
   u: number;
   load: number;
   work: number;
+  /** dW/du of the work as computed (P itself, to the accuracy of the released-energy rule), and dP/du, when
+   * known: the energy balance's Newton and Halley steps use them (they never change the root). */
+  slope?: number;
+  stiffness?: number;
 }
 
 /** The line's force–deflection curve at one horizontal position. */
@@ -24,6 +29,8 @@ export interface LineForceDeflection {
 }
 
 const UNKNOWNS = ["H", "VA", "loadArc", "load"] as const;
+/** dv/du along the load path, for the four unknowns. */
+type Tangent = Record<(typeof UNKNOWNS)[number], number>;
 
 /** Lagrange basis on the nodes 0, 1/3, 2/3, 1, as power coefficients. */
 const NODES = [0, 1 / 3, 2 / 3, 1];
@@ -56,64 +63,71 @@ const CORRECTION = BASIS.map((li) =>
  * states at u/3, 2u/3 and u; checked against a dense quadrature of P(u) in the tests.
  * Solutions already found are reused as starting points; they never change the answer.
  */
-export function lineForceDeflection(
-  line: Line,
-  length: number,
-  x: number,
-  breakingStrength: number,
-  start?: { unloaded: LineVariables; loaded: LineVariables },
-): LineForceDeflection {
+export function lineForceDeflection(line: Line, length: number, x: number, breakingStrength: number, start?: { unloaded: LineVariables }): LineForceDeflection {
   const unloaded = solveLine(line, length, { force: 0, x }, breakingStrength, start?.unloaded);
   const energyOf = (v: LineVariables) => {
     const e = lineEnergy(line, v);
     return e.strain + e.gravity;
   };
-  const jumpOf = (v: LineVariables) => {
-    const { Vm, Vp } = segmentEnds(line, v);
-    return kinkPotential(line.curve, Math.hypot(v.H, Vm)) - kinkPotential(line.curve, Math.hypot(v.H, Vp));
-  };
-  const base = { variables: unloaded.variables, energy: energyOf(unloaded.variables), jump: 0 };
-  const known = new Map<number, { variables: LineVariables; energy: number; jump: number }>([[0, base]]);
-  // The first solve starts from a loaded state of a neighbouring position when given, later ones from the nearest solved deflection.
-  const seed: LineVariables = start ? start.loaded : { ...unloaded.variables, load: 1e-3 * Math.max(unloaded.variables.H, 1) };
-  // A new state starts from the line through the two solved states nearest in deflection (the first from
-  // the seed): about one Newton step fewer than starting from the nearest alone.
-  const predicted = (u: number): LineVariables => {
-    let first: [number, LineVariables] | undefined;
-    let second: [number, LineVariables] | undefined;
-    for (const [k, s] of known) {
-      if (k === 0) continue;
-      if (!first || Math.abs(k - u) < Math.abs(first[0] - u)) {
-        second = first;
-        first = [k, s.variables];
-      } else if (!second || Math.abs(k - u) < Math.abs(second[0] - u)) second = [k, s.variables];
-    }
-    if (!first) return seed;
-    if (!second) return first[1];
-    const [u1, a] = first;
-    const [u2, b] = second;
-    const t = (u - u1) / (u2 - u1);
-    const guess = {
-      ...a,
-      H: a.H + t * (b.H - a.H),
-      VA: a.VA + t * (b.VA - a.VA),
-      loadArc: a.loadArc + t * (b.loadArc - a.loadArc),
-      load: a.load + t * (b.load - a.load),
-    };
-    return guess.H > 0 && guess.load >= 0 && guess.loadArc > 0 && guess.loadArc < length ? guess : a;
+  // ΔG across the load, and how fast it changes along the path: dG/dT = −(1 + ε(T)), since de/dT = T·dε/dT.
+  const jumpOf = (v: LineVariables, tangent: Tangent | undefined) => {
+    const Vm = v.VA + line.weight * v.loadArc;
+    const Vp = Vm + v.load;
+    const Tm = Math.hypot(v.H, Vm);
+    const Tp = Math.hypot(v.H, Vp);
+    const jump = kinkPotential(line.curve, Tm) - kinkPotential(line.curve, Tp);
+    if (!tangent) return { jump, jumpRate: undefined };
+    const dVm = tangent.VA + line.weight * tangent.loadArc;
+    const dTm = (v.H * tangent.H + Vm * dVm) / Tm;
+    const dTp = (v.H * tangent.H + Vp * (dVm + tangent.load)) / Tp;
+    return { jump, jumpRate: -(1 + strainAt(line.curve, Tm)) * dTm + (1 + strainAt(line.curve, Tp)) * dTp };
   };
   const condition = (u: number): LineEquation => ({ kind: "loadY", y: unloaded.loadY - u });
+  const equations = (u: number): LineEquation[] => [{ kind: "span" }, { kind: "rise" }, { kind: "loadX", x }, condition(u)];
+  // Every solved state keeps its tangent along the path, dv/du (the loadY target is y₀ − u: minus its sensitivity).
+  const solveAt = (u: number, guess: LineVariables) => {
+    const { variables, sensitivity: d } = solveEquilibrium(line, guess, UNKNOWNS, equations(u), "line force–deflection", 3);
+    const tangent = d && { H: -d.H!, VA: -d.VA!, loadArc: -d.loadArc!, load: -d.load! };
+    return { variables, tangent, energy: energyOf(variables), ...jumpOf(variables, tangent) };
+  };
+  type Solved = ReturnType<typeof solveAt>;
+  // The unloaded state is on the path too (u = 0, no load, no jump): solved again with the four unknowns for its tangent.
+  const base: Solved = solveAt(0, unloaded.variables);
+  const known = new Map<number, Solved>([[0, base]]);
+  // A new state starts from the cubic Hermite through the solved states on either side of it (value and
+  // tangent), or from the tangent of the nearest when none lies beyond: a Newton step or two fewer.
+  const predicted = (u: number): LineVariables => {
+    let below: [number, Solved] | undefined;
+    let above: [number, Solved] | undefined;
+    for (const entry of known) {
+      const k = entry[0];
+      if (k <= u && (!below || k > below[0])) below = entry;
+      if (k > u && (!above || k < above[0])) above = entry;
+    }
+    const [ua, a] = below ?? above!;
+    if (!a.tangent) return a.variables;
+    const guess = { ...a.variables };
+    const keys = ["H", "VA", "loadArc", "load"] as const;
+    if (below && above && above[1].tangent) {
+      const [ub, b] = above;
+      const h = ub - ua;
+      const t = (u - ua) / h;
+      const t2 = t * t;
+      const t3 = t2 * t;
+      for (const key of keys) {
+        guess[key] =
+          (2 * t3 - 3 * t2 + 1) * a.variables[key] +
+          (t3 - 2 * t2 + t) * h * a.tangent[key] +
+          (3 * t2 - 2 * t3) * b.variables[key] +
+          (t3 - t2) * h * b.tangent![key];
+      }
+    } else for (const key of keys) guess[key] = a.variables[key] + (u - ua) * a.tangent[key];
+    return guess.H > 0 && guess.load >= 0 && guess.loadArc > 0 && guess.loadArc < length ? guess : a.variables;
+  };
   const solved = (u: number) => {
     const found = known.get(u);
     if (found) return found;
-    const variables = solveEquilibrium(
-      line,
-      predicted(u),
-      UNKNOWNS,
-      [{ kind: "span" }, { kind: "rise" }, { kind: "loadX", x }, condition(u)],
-      "line force–deflection",
-    ).variables;
-    const s = { variables, energy: energyOf(variables), jump: jumpOf(variables) };
+    const s = solveAt(u, predicted(u));
     known.set(u, s);
     return s;
   };
@@ -121,10 +135,23 @@ export function lineForceDeflection(
   const state = (u: number): LoadPathState => {
     if (u === 0) return { u, load: 0, work: 0 };
     const nodes = NODES.map((t) => (t === 0 ? base : solved(t * u)));
+    // The released energy by the cubic rule, and its exact derivative in u (each node sits at t·u), so the
+    // energy balance's Newton steps follow the work as computed: dW/du = P + ΔG·ds_P/du − d(released)/du.
     let released = 0;
-    for (let i = 0; i < 4; i++) for (let j = 0; j < 4; j++) released += nodes[i].jump * CORRECTION[i][j] * nodes[j].variables.loadArc;
+    let releasedRate = 0;
+    for (let i = 0; i < 4; i++) {
+      for (let j = 0; j < 4; j++) {
+        const a = nodes[i];
+        const b = nodes[j];
+        released += a.jump * CORRECTION[i][j] * b.variables.loadArc;
+        releasedRate += CORRECTION[i][j] * (NODES[i] * (a.jumpRate ?? NaN) * b.variables.loadArc + a.jump * NODES[j] * (b.tangent?.loadArc ?? NaN));
+      }
+    }
     const end = nodes[3];
-    return { u, load: end.variables.load, work: end.energy - base.energy - released };
+    const work = end.energy - base.energy - released;
+    // Without a tangent somewhere (a singular Jacobian) the rate is NaN and the energy balance steps on P alone.
+    if (!end.tangent || !Number.isFinite(releasedRate)) return { u, load: end.variables.load, work };
+    return { u, load: end.variables.load, work, slope: end.variables.load + end.jump * end.tangent.loadArc - releasedRate, stiffness: end.tangent.load };
   };
   const variablesAt = (u: number) => solved(u).variables;
   return { unloadedY: unloaded.loadY, unloaded: unloaded.variables, load, state, variablesAt };

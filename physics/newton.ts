@@ -14,8 +14,8 @@ export interface NewtonOptions {
   maxIterations?: number;
 }
 
-/** Damped Newton–Raphson for a small square system; halves the step until the residual falls. */
-export function newtonSolve(system: NewtonSystem, start: number[], options: NewtonOptions): { x: number[]; iterations: number } {
+/** Damped Newton–Raphson for a small square system; halves the step until the residual falls. Also returns the Jacobian at the root. */
+export function newtonSolve(system: NewtonSystem, start: number[], options: NewtonOptions): { x: number[]; iterations: number; jacobian: number[][] } {
   const tolerance = options.tolerance ?? 1e-11;
   const maxIterations = options.maxIterations ?? 60;
   let x = start.slice();
@@ -24,7 +24,7 @@ export function newtonSolve(system: NewtonSystem, start: number[], options: Newt
   let why: string | undefined;
   let iteration = 0;
   for (; iteration <= maxIterations; iteration++) {
-    if (norm < tolerance) return { x, iterations: iteration };
+    if (norm < tolerance) return { x, iterations: iteration, jacobian };
     if (iteration === maxIterations) break;
     if (!Number.isFinite(norm)) {
       why = `reached a non-finite residual after ${iteration} iterations`;
@@ -71,7 +71,7 @@ function maxAbs(values: number[]): number {
 }
 
 /** Gaussian elimination with partial pivoting; null if the matrix is singular. */
-function solveLinear(matrix: number[][], rhs: number[]): number[] | null {
+export function solveLinear(matrix: number[][], rhs: number[]): number[] | null {
   const n = rhs.length;
   const a: number[][] = [];
   for (let i = 0; i < n; i++) a.push([...matrix[i], rhs[i]]);

@@ -1,4 +1,6 @@
-// Runs every *.bench.ts module beside this file and prints a Markdown table of medians.
+// Runs every *.bench.ts module beside this file and prints a Markdown table of medians. Optional arguments
+// narrow it: `npm run bench -- physics evaluateRig` runs only the files whose name contains the first (the
+// others are not even loaded: some prepare large inputs) and, of those, the benchmarks whose name contains the second.
 import { readdirSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
@@ -33,18 +35,19 @@ function formatTime(ms: number): string {
 
 async function main() {
   const here = dirname(fileURLToPath(import.meta.url));
+  const [fileFilter = "", nameFilter = ""] = process.argv.slice(2).map((a) => a.toLowerCase());
   const rows: string[] = [];
   for (const file of readdirSync(here)
-    .filter((f) => f.endsWith(".bench.ts"))
+    .filter((f) => f.endsWith(".bench.ts") && f.toLowerCase().includes(fileFilter))
     .sort()) {
     const benchFile: { benchmarks?: Benchmark[]; ratios?: Ratio[] } = await import(pathToFileURL(join(here, file)).href);
     const medians = new Map<string, number>();
-    for (const b of benchFile.benchmarks ?? []) {
+    for (const b of (benchFile.benchmarks ?? []).filter((b) => b.name.toLowerCase().includes(nameFilter))) {
       const ms = measure(b);
       medians.set(b.name, ms);
       rows.push(`| ${b.name} | ${formatTime(ms)} | ${b.goal} |`);
     }
-    for (const r of benchFile.ratios ?? []) {
+    for (const r of (benchFile.ratios ?? []).filter((r) => medians.has(r.fast) && medians.has(r.slow))) {
       const ratio = (medians.get(r.slow) ?? NaN) / (medians.get(r.fast) ?? NaN);
       rows.push(`| ${r.name} | ${ratio.toFixed(0)}× | ${r.goal} |`);
     }
