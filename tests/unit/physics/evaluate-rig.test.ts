@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
-import { describe, expect, it } from "vitest";
-import { CAUTIONS, ENGINE_VERSION, evaluateRig, RigInputError, RigInputSchema } from "../../../physics";
+import { beforeEach, describe, expect, it } from "vitest";
+import { CAUTIONS, ENGINE_VERSION, evaluateRig, RigInputError, RigInputSchema, type RigResult } from "../../../physics";
 
 const example = JSON.parse(readFileSync(new URL("../../../physics/examples/quarry-highline.json", import.meta.url), "utf8"));
 
@@ -21,7 +21,11 @@ function hasNoBadNumber(value: unknown): boolean {
 }
 
 describe("evaluateRig", () => {
-  const result = evaluateRig(example);
+  // Evaluated in each test, not once in the describe body, so mutation testing sees which tests run the engine.
+  let result: RigResult;
+  beforeEach(() => {
+    result = evaluateRig(example);
+  });
 
   it("returns every figure with the engine version, the cautions and plain JSON", () => {
     expect(result.engineVersion).toBe(ENGINE_VERSION);

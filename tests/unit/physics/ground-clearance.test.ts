@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
-import { describe, expect, it } from "vitest";
-import { evaluateRig, groundHeightAt, monotoneCubic, RigInputError, RULE_OF_THUMB } from "../../../physics";
+import { beforeEach, describe, expect, it } from "vitest";
+import { evaluateRig, groundHeightAt, monotoneCubic, RigInputError, RULE_OF_THUMB, type RigResult } from "../../../physics";
 
 const example = JSON.parse(readFileSync(new URL("../../../physics/examples/quarry-highline.json", import.meta.url), "utf8"));
 const withGround = JSON.parse(readFileSync(new URL("../../../physics/examples/quarry-highline-ground.json", import.meta.url), "utf8"));
@@ -95,7 +95,11 @@ describe("the walker's lowest point and the clearance after a leash fall", () =>
 });
 
 describe("the lowest clearance over the span", () => {
-  const r = evaluateRig(withGround);
+  // Evaluated in each test, not once in the describe body, so mutation testing sees which tests run the engine.
+  let r: RigResult;
+  beforeEach(() => {
+    r = evaluateRig(withGround);
+  });
 
   it("is no more than the clearance at the fall position, and is itself an exact catch at its position", () => {
     expect(r.clearance.leashFall!.clearanceM).toBeLessThanOrEqual(r.leashFall.groundClearanceM!);

@@ -1,9 +1,13 @@
-import { describe, expect, it } from "vitest";
-import { createStretchCurve, pieceAt, RigInputError, strainAt, tensionAtStrain } from "../../../physics";
+import { beforeEach, describe, expect, it } from "vitest";
+import { createStretchCurve, pieceAt, RigInputError, strainAt, tensionAtStrain, type StretchCurve } from "../../../physics";
 import { STRETCHY } from "./fixtures";
 
 describe("createStretchCurve / strainAt", () => {
-  const curve = createStretchCurve(STRETCHY);
+  // Built in each test, not once in the describe body, so mutation testing sees which tests run it.
+  let curve: StretchCurve;
+  beforeEach(() => {
+    curve = createStretchCurve(STRETCHY);
+  });
 
   it("passes through every measured point and interpolates linearly between them", () => {
     for (const p of STRETCHY) expect(strainAt(curve, p.tensionKN * 1000)).toBeCloseTo(p.elongationPct / 100, 14);
