@@ -98,6 +98,11 @@ function lineFigures(model: KitModel) {
 /** Slip results recorded on the Kit's bench carry the test's id, so they are told apart from typed ones. */
 export const isBenchResult = (result: Record<string, unknown>) => typeof result.testId === "string";
 
+/** A list as given, or no items for anything else (a value of the wrong type is the engine's to refuse). */
+function listOrNone<T>(value: T[] | undefined): T[] {
+  return Array.isArray(value) ? value : [];
+}
+
 /**
  * The engine's input for the planner's values: picked Kit models fill their figures, the site fills the
  * span, height difference and ground, and the picked brake brings the crew's slip tests of that model.
@@ -146,7 +151,8 @@ export function prepareRigInput(values: unknown, catalogue: KitCatalogue, site: 
   if (backup && input.backup) Object.assign(input.backup, lineFigures(backup));
 
   for (const side of ["a", "b"] as const) {
-    (input.anchors?.[side]?.components ?? []).forEach((component, i) => {
+    // Components that are not a list are left as sent, for the engine to refuse on their field.
+    listOrNone(input.anchors?.[side]?.components).forEach((component, i) => {
       const model = pick(`anchors.${side}.components.${i}.modelId`, component, "modelId", PICK_KINDS.component);
       if (!model) return;
       if (model.specs.mbsKN === undefined) {
@@ -203,7 +209,7 @@ export type PreparedRig = ReturnType<typeof prepareRigInput>;
  */
 export function plannerValues(revision: { inputs: Record<string, unknown>; snapshot: RevisionSnapshot }): Record<string, unknown> {
   const values = structuredClone(revision.inputs) as Input;
-  values.slipBench = (values.slipBench ?? []).filter((r) => !isBenchResult(r));
+  values.slipBench = listOrNone(values.slipBench).filter((r) => !isBenchResult(r));
   if (revision.snapshot.site) delete values.ground;
   return { ...values, siteId: revision.snapshot.site?.id ?? null };
 }
@@ -231,13 +237,15 @@ export function kitChangesSince(snapshot: RevisionSnapshot, catalogue: KitCatalo
  */
 export function recordedCatalogue(revision: { inputs: Record<string, unknown>; snapshot: RevisionSnapshot }): KitCatalogue {
   const brake = revision.snapshot.gear.find((g) => g.field === "brake.modelId");
-  const bench = ((revision.inputs.slipBench ?? []) as Record<string, unknown>[]).filter(isBenchResult).map((r) => ({
-    id: String(r.testId),
-    deviceId: brake?.modelId ?? "",
-    ropeDiameterMm: Number(r.ropeDiameterMm),
-    result: r.result as KitBenchTest["result"],
-    forceN: Number(r.forceN),
-  }));
+  const bench = listOrNone(revision.inputs.slipBench as Record<string, unknown>[] | undefined)
+    .filter(isBenchResult)
+    .map((r) => ({
+      id: String(r.testId),
+      deviceId: brake?.modelId ?? "",
+      ropeDiameterMm: Number(r.ropeDiameterMm),
+      result: r.result as KitBenchTest["result"],
+      forceN: Number(r.forceN),
+    }));
   const models = revision.snapshot.gear.map((g) => ({ id: g.modelId, kind: g.kind, name: g.name, specs: g.specs, retiredOn: null }));
   return { models: [...new Map(models.map((m) => [m.id, m])).values()], bench };
 }
