@@ -96,7 +96,7 @@ function lineFigures(model: KitModel) {
 }
 
 /** Slip results recorded on the Kit's bench carry the test's id, so they are told apart from typed ones. */
-export const isBenchResult = (result: Record<string, unknown>) => typeof result.testId === "string";
+export const isBenchResult = (result: Record<string, unknown> | null) => typeof result?.testId === "string";
 
 /** A list as given, or no items for anything else (a value of the wrong type is the engine's to refuse). */
 function listOrNone<T>(value: T[] | undefined): T[] {
