@@ -23,6 +23,8 @@ test("sign up, create a crew, invite someone by e-mail, and they join with the r
   await owner.getByLabel("Role", { exact: true }).selectOption("rigger");
   await owner.getByRole("button", { name: "Send invitation" }).click();
   await expect(owner.getByRole("table", { name: "Open invitations" })).toContainText(invitee.email);
+  // The page's title is streamed in after the form's refresh: check the page once it has it.
+  await expect(owner).toHaveTitle(/\S/);
   const serious = (await new AxeBuilder({ page: owner }).analyze()).violations.filter((v) => v.impact === "serious" || v.impact === "critical");
   expect(serious.map((v) => v.id)).toEqual([]);
 
