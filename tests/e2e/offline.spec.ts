@@ -100,8 +100,9 @@ test("a signed-off rig opened online is read, shown as a card and worked offline
   await member.reload();
   await expect(first).toBeChecked();
   await expect(member.getByText(/Ticked by Tove Harlan/)).toBeVisible();
-  const readings = await member.request.get(`/api/rigs/${rig.rigId}/revisions/${rig.revisionId}/readings`);
-  expect((await readings.json()).readings).toHaveLength(1);
+  // The waiting writes are sent one after another: the reading lands just after the tick shows.
+  const readingsPath = `/api/rigs/${rig.rigId}/revisions/${rig.revisionId}/readings`;
+  await expect.poll(async () => (await (await member.request.get(readingsPath)).json()).readings.length).toBe(1);
   const log = member.getByRole("region", { name: "What happened" });
   await expect(log.getByText("Ticked: Anchors as planned")).toHaveCount(1);
 
@@ -113,7 +114,7 @@ test("a signed-off rig opened online is read, shown as a card and worked offline
     const replay = await post(member.request, baseURL!, url, JSON.parse(body));
     expect(replay).toMatchObject({ status: 200, body: { replayed: true } });
   }
-  expect((await (await member.request.get(`/api/rigs/${rig.rigId}/revisions/${rig.revisionId}/readings`)).json()).readings).toHaveLength(1);
+  expect((await (await member.request.get(readingsPath)).json()).readings).toHaveLength(1);
   await member.reload();
   await expect(log.getByText("Ticked: Anchors as planned")).toHaveCount(1);
 });
