@@ -5,7 +5,7 @@ import type { User } from "lucia";
 import { getCurrentSession } from "./auth/session";
 import { can, refusalText, type Action, type MemberAction, type Role, type RoleRefusal } from "./roles";
 import { isUuid } from "./validations/ids";
-import { membershipIn, membershipsOf, type Crew } from "@/db/crews";
+import type { Crew, Membership } from "@/db/crews";
 
 export const CREW_COOKIE = "spanwright_crew";
 
@@ -30,21 +30,17 @@ export class AccessError extends Error {
   }
 }
 
-/** The crew this request works in: the one chosen in the crew cookie, else the person's first. */
-export async function currentMembership(userId: string) {
+/** The crew this request works in: the one chosen in the crew cookie, else the person's first (crews by name). */
+export async function currentMembership(user: User): Promise<Membership | null> {
   const chosen = (await cookies()).get(CREW_COOKIE)?.value;
-  if (chosen) {
-    const membership = await membershipIn(userId, chosen);
-    if (membership) return membership;
-  }
-  return (await membershipsOf(userId))[0] ?? null;
+  return user.memberships.find((m) => m.crew.id === chosen) ?? user.memberships[0] ?? null;
 }
 
 /** The signed-in person's crew context, or an AccessError: 401 when nobody is signed in, 404 when they are in no crew. */
 async function crewContext(): Promise<CrewContext> {
   const signedIn = await getCurrentSession();
   if (!signedIn) throw new AccessError(401, "Sign in first.");
-  const membership = await currentMembership(signedIn.user.id);
+  const membership = await currentMembership(signedIn.user);
   if (!membership) throw new AccessError(404, "You are not in a crew yet: create one or accept an invitation.");
   return { user: signedIn.user, sessionId: signedIn.session.id, crew: membership.crew, role: membership.role };
 }

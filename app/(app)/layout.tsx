@@ -4,16 +4,15 @@ import { AccountMenu } from "@/components/account-menu";
 import { CrewSwitcher } from "@/components/crew/crew-switcher";
 import { getCurrentSession } from "@/lib/auth/session";
 import { currentMembership } from "@/lib/authz";
-import { membershipsOf } from "@/db/crews";
 
 // Pages check access themselves; the shell only shows who is signed in and in which crew.
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   const signedIn = await getCurrentSession();
   if (!signedIn) return <AppShell>{children}</AppShell>;
-  const [memberships, current] = await Promise.all([membershipsOf(signedIn.user.id), currentMembership(signedIn.user.id)]);
+  const current = await currentMembership(signedIn.user);
   return (
     <AppShell
-      crewSwitcher={current ? <CrewSwitcher crews={memberships.map((m) => m.crew)} currentId={current.crew.id} /> : null}
+      crewSwitcher={current ? <CrewSwitcher crews={signedIn.user.memberships.map((m) => m.crew)} currentId={current.crew.id} /> : null}
       accountMenu={<AccountMenu name={signedIn.user.name} role={current?.role ?? null} />}
     >
       <QueryProvider>{children}</QueryProvider>
