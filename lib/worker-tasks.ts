@@ -17,8 +17,12 @@ export interface TraceJob {
 }
 
 export const TASKS = {
-  /** The rig evaluated, its sentences in the crew's units (the figures are SI whatever the units). */
-  evaluateRig: (job: { input: unknown; units: DisplayUnits }) => ({ result: evaluateRig(job.input, { units: job.units }) }),
+  /**
+   * The rig evaluated, its sentences in the crew's units (the figures are SI whatever the units), as JSON text: written
+   * here, a result of some 40 kB crosses the thread as one string instead of being copied object by object and then
+   * written out again on the server's own thread.
+   */
+  evaluateRigJson: (job: { input: unknown; units: DisplayUnits }) => ({ result: JSON.stringify(evaluateRig(job.input, { units: job.units })) }),
   /** Type check, hash, parse and slip detection of an uploaded trace; the bytes go back to the caller for storing. */
   analyseTrace: (job: TraceJob) => {
     const { contentType, text } = traceText(job.fileName, job.bytes);
