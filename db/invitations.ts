@@ -30,29 +30,23 @@ const columns = {
 
 const withCrew = () => db("invitations").join("crews", "crews.id", "invitations.crew_id");
 
-/**
- * Stores the invitation and sends its mail in one transaction: a mail the relay refuses leaves no invitation
- * behind that nobody received. `send` is given the stored invitation.
- */
-export async function createInvitation(
-  input: { crewId: string; email: string; role: Role; tokenHash: string; invitedBy: string },
-  send: (invitation: Invitation) => Promise<void>,
-): Promise<Invitation> {
-  return db.transaction(async (trx) => {
-    const [{ id }] = await trx("invitations")
-      .insert({
-        crew_id: input.crewId,
-        email: input.email,
-        role: input.role,
-        token_hash: input.tokenHash,
-        invited_by: input.invitedBy,
-        expires_at: trx.raw("now() + make_interval(days => ?)", [INVITATION_DAYS]),
-      })
-      .returning("id");
-    const invitation: Invitation = await trx("invitations").join("crews", "crews.id", "invitations.crew_id").where("invitations.id", id).first(columns);
-    await send(invitation);
-    return invitation;
-  });
+export async function createInvitation(input: { crewId: string; email: string; role: Role; tokenHash: string; invitedBy: string }): Promise<Invitation> {
+  const [{ id }] = await db("invitations")
+    .insert({
+      crew_id: input.crewId,
+      email: input.email,
+      role: input.role,
+      token_hash: input.tokenHash,
+      invited_by: input.invitedBy,
+      expires_at: db.raw("now() + make_interval(days => ?)", [INVITATION_DAYS]),
+    })
+    .returning("id");
+  return withCrew().where("invitations.id", id).first(columns);
+}
+
+/** Deletes an invitation whose mail the relay refused: nobody received its link, so nothing should be left to accept. */
+export async function withdrawUnsentInvitation(crewId: string, id: string): Promise<void> {
+  await db("invitations").where({ crew_id: crewId, id }).whereNull("accepted_at").delete();
 }
 
 /** Invitations of the crew not yet accepted or revoked, newest first. */

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { crewRoute, parseBody } from "@/lib/api";
 import { InviteSchema } from "@/lib/validations/crew";
-import { createInvitation, openInvitationsOf } from "@/db/invitations";
+import { createInvitation, openInvitationsOf, withdrawUnsentInvitation } from "@/db/invitations";
 import { memberByEmail } from "@/db/crews";
 import { RequestError } from "@/lib/http-errors";
 import { withArticle } from "@/lib/roles";
@@ -26,13 +26,14 @@ export const POST = crewRoute("crew.invite", async ({ crew, user }, request) => 
   await spendAttempt(["linkMail", email]);
   const { token, tokenHash } = newToken();
   const url = `${appOrigin(request)}/invitations/${token}`;
-  const invitation = await createInvitation({ crewId: crew.id, email, role, tokenHash, invitedBy: user.id }, async () => {
-    try {
-      await sendMail(invitationMail({ to: email, crewName: crew.name, inviterName: user.name, role, url, days: INVITATION_DAYS }));
-    } catch (error) {
-      console.error("invitations: the mail relay refused the invitation:", error);
-      throw new RequestError(422, UNSENT, { email: UNSENT });
-    }
-  });
+  const invitation = await createInvitation({ crewId: crew.id, email, role, tokenHash, invitedBy: user.id });
+  // Sent with no transaction open: a slow relay must not hold one of the pool's connections meanwhile.
+  try {
+    await sendMail(invitationMail({ to: email, crewName: crew.name, inviterName: user.name, role, url, days: INVITATION_DAYS }));
+  } catch (error) {
+    console.error("invitations: the mail relay refused the invitation:", error);
+    await withdrawUnsentInvitation(crew.id, invitation.id);
+    throw new RequestError(422, UNSENT, { email: UNSENT });
+  }
   return NextResponse.json({ invitation }, { status: 201 });
 });
