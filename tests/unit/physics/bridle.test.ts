@@ -54,3 +54,33 @@ describe("anchor warnings", () => {
     expect(evaluateRig(bare).warnings.some((w) => w.startsWith("Anchor b has no component in its load path"))).toBe(true);
   });
 });
+
+describe("a bridle's angle at the edges (the product's own limits, common practice, no source)", () => {
+  it("takes 0° up to just under 180°, refuses a negative angle and 180°, naming the anchor's field", () => {
+    expect(anchorLoads({ kind: "bridle", includedAngleDeg: 0 }, 1000).leg).toBeCloseTo(500, 9);
+    expect(anchorLoads({ kind: "bridle", includedAngleDeg: 179 }, 1000).leg).toBeCloseTo(1000 / (2 * Math.cos((89.5 * Math.PI) / 180)), 6);
+    for (const angle of [-1, 180, Number.NaN]) {
+      expect(() => anchorLoads({ kind: "bridle", includedAngleDeg: angle }, 1000, "anchors.b")).toThrow(
+        expect.objectContaining({ field: "anchors.b.includedAngleDeg", allowed: "an included angle ≥ 0° and < 180°" }),
+      );
+    }
+    expect(() => anchorLoads({ kind: "bridle", includedAngleDeg: -1 }, 1000)).toThrow(expect.objectContaining({ field: "anchor.includedAngleDeg" }));
+  });
+
+  it("at 120° exactly each leg takes the whole line tension: cautioned, not yet warned of more than it", () => {
+    const loads = anchorLoads({ kind: "bridle", includedAngleDeg: 120 }, 10_000);
+    expect(anchorWarnings("a", { kind: "bridle", includedAngleDeg: 120 }, 1, loads, "si")).toEqual([
+      "Anchor a: a bridle angle of 120° puts 10.00 kN on each leg (100 % of the line tension); past 90° the load on each leg climbs steeply, to the whole line tension at 120°.",
+    ]);
+  });
+
+  it("says both when a wide bridle has nothing in its load path, the load path first", () => {
+    const warnings = anchorWarnings("b", { kind: "bridle", includedAngleDeg: 91 }, 0, anchorLoads({ kind: "bridle", includedAngleDeg: 91 }, 10_000), "si");
+    expect(warnings).toEqual([
+      "Anchor b has no component in its load path: nothing there is checked against its MBS. Add the slings, shackles, master point and anchor points it is rigged with.",
+      // 10 kN / (2 cos 45.5°) = 7.1337 kN, 71.34 % (hand-worked), both rounded up.
+      "Anchor b: a bridle angle of 91° puts 7.14 kN on each leg (72 % of the line tension); past 90° the load on each leg climbs steeply, to the whole line tension at 120°.",
+    ]);
+    expect(anchorWarnings("b", { kind: "single" }, 1, anchorLoads({ kind: "single" }, 10_000), "si")).toEqual([]);
+  });
+});
