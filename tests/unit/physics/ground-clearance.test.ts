@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { beforeEach, describe, expect, it } from "vitest";
-import { evaluateRig, groundHeightAt, monotoneCubic, RigInputError, RULE_OF_THUMB, type RigResult } from "../../../physics";
+import { checkGround, evaluateRig, groundHeightAt, monotoneCubic, RigInputError, RULE_OF_THUMB, type RigResult } from "../../../physics";
 
 const example = JSON.parse(readFileSync(new URL("../../../physics/examples/quarry-highline.json", import.meta.url), "utf8"));
 const withGround = JSON.parse(readFileSync(new URL("../../../physics/examples/quarry-highline-ground.json", import.meta.url), "utf8"));
@@ -163,5 +163,49 @@ describe("the crew's minimum brake margin", () => {
   });
   it("rejects a minimum margin ≤ 0", () => {
     expect(() => evaluateRig({ ...example, minimumBrakeMargin: 0 })).toThrow(RigInputError);
+  });
+});
+
+describe("the ground's points at their edges (hand-worked)", () => {
+  const points = [
+    { xM: 10, heightM: -4 },
+    { xM: 30, heightM: -24 },
+    { xM: 50, heightM: -20 },
+  ];
+  it("takes each point's own height at the point, and is linear just either side of it", () => {
+    expect(groundHeightAt(points, 10)).toBe(-4);
+    expect(groundHeightAt(points, 30)).toBe(-24);
+    expect(groundHeightAt(points, 50)).toBe(-20);
+    expect(groundHeightAt(points, 11)).toBe(-5);
+    expect(groundHeightAt(points, 31)).toBe(-23.8);
+    expect(groundHeightAt(points, 49)).toBe(-20.2);
+    expect(groundHeightAt(points, 9)).toBe(-4);
+    expect(groundHeightAt(points, 51)).toBe(-20);
+    expect(groundHeightAt([{ xM: 5, heightM: -2 }], 100)).toBe(-2);
+  });
+
+  it("takes a point at the span's end, refuses one past it or at the same distance as the one before, saying what is allowed", () => {
+    expect(
+      checkGround(
+        [
+          { xM: 0, heightM: -1 },
+          { xM: 120, heightM: 1 },
+        ],
+        120,
+      ),
+    ).toHaveLength(2);
+    expect(() => checkGround([{ xM: 120.01, heightM: 0 }], 120)).toThrow(
+      expect.objectContaining({ field: "ground.points.0.xM", allowed: "a distance from anchor A from 0 m to the span, 120 m" }),
+    );
+    expect(() =>
+      checkGround(
+        [
+          { xM: 10, heightM: 0 },
+          { xM: 40, heightM: 0 },
+          { xM: 40, heightM: -3 },
+        ],
+        120,
+      ),
+    ).toThrow(expect.objectContaining({ field: "ground.points.2.xM", allowed: "farther from A than the point before (40 m): points in order from A" }));
   });
 });
