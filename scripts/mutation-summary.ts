@@ -101,6 +101,9 @@ export function blockIn(readme: string): string | null {
   return start < 0 || end < 0 ? null : readme.slice(start, end + BLOCK_END.length);
 }
 
+/** The least mutation score of physics/ that `npm test` accepts, %. */
+export const SCORE_GOAL_PCT = 90;
+
 /** Disagreements between the summary's own figures (the score and the survivor list follow from the counts). */
 export function inconsistencies(s: MutationSummary): string[] {
   const problems: string[] = [];
@@ -110,5 +113,6 @@ export function inconsistencies(s: MutationSummary): string[] {
   const total = valid + s.compileError + s.runtimeError + s.ignored;
   if (total !== s.mutants) problems.push(`mutants ${s.mutants} is not the sum of the statuses, ${total}`);
   if (s.survivors.length !== s.survived + s.noCoverage) problems.push(`${s.survivors.length} survivors listed, ${s.survived + s.noCoverage} counted`);
+  if (s.scorePct < SCORE_GOAL_PCT) problems.push(`the score, ${s.scorePct} %, is below the goal of ${SCORE_GOAL_PCT} %: kill the survivors it lists`);
   return problems;
 }
