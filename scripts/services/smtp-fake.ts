@@ -15,7 +15,8 @@ function addresses(field: AddressObject | AddressObject[] | undefined): string[]
 
 /**
  * A local SMTP server on loopback that accepts every message and keeps it as one JSON file in
- * `directory`, where the development mailbox page reads it.
+ * `directory`, where the development mailbox page reads it. Like a real relay it refuses a recipient under the
+ * reserved top-level domain `.invalid` (RFC 2606: no such address can exist), so a refused mail can be tried.
  */
 export async function startSmtpFake(port: number, directory: string): Promise<SmtpFake> {
   fs.mkdirSync(directory, { recursive: true });
@@ -23,6 +24,10 @@ export async function startSmtpFake(port: number, directory: string): Promise<Sm
     authOptional: true,
     disabledCommands: ["STARTTLS"],
     logger: false,
+    onRcptTo(address, _session, callback) {
+      if (!address.address.toLowerCase().endsWith(".invalid")) return callback();
+      callback(Object.assign(new Error(`No mailbox here for ${address.address}`), { responseCode: 550 }));
+    },
     onData(stream, _session, callback) {
       simpleParser(stream)
         .then((mail) => {

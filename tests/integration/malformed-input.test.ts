@@ -88,6 +88,16 @@ describe("malformed input", () => {
     expect((await response.json()).fieldErrors.email).toBe("Use an e-mail address of at most 254 characters.");
     expect(await count("invitations")).toBe(0);
   });
+
+  it("withdraws an invitation whose mail the relay refuses, saying so on the address (RFC 2606: .invalid has no mailboxes)", async () => {
+    const response = await owner.post("/api/crew/invitations", { email: "nobody@refused.invalid", role: "member" });
+    expect(response.status).toBe(422);
+    expect((await response.json()).fieldErrors.email).toBe(
+      "The invitation mail could not be sent to this address, so no invitation was made: check the address and try again.",
+    );
+    expect(await count("invitations")).toBe(0);
+    expect((await owner.get("/api/crew/invitations")).status).toBe(200);
+  });
 });
 
 async function sessionOf(userId: string): Promise<string> {
