@@ -17,8 +17,10 @@ export interface LineCatch extends LeashFallPeak {
   fallHeight: number;
   /** Height of the unloaded line at x, m (y up from A). */
   unloadedY: number;
-  /** The line holding the peak load at x. */
+  /** The line holding the peak load at x; its iterations are those of every equilibrium solved for the catch. */
   caught: LineSolution;
+  /** Equilibria solved for the catch (the unloaded line's included). */
+  solves: number;
   hint: CatchHint;
 }
 
@@ -43,12 +45,14 @@ export function catchOnLine(
   const guess = hint && hint.x > 0 && hint.x < line.span ? (hint.deflection * shape(x)) / shape(hint.x) : undefined;
   const peak = leashFallPeak(mass, freeFall, forceDeflection.state, guess);
   const loaded = forceDeflection.variablesAt(peak.deflection);
+  const { solves, iterations } = forceDeflection.effort();
   return {
     ...peak,
     x,
     fallHeight: freeFall,
     unloadedY: forceDeflection.unloadedY,
-    caught: describeEquilibrium(line, loaded, 0),
+    caught: describeEquilibrium(line, loaded, iterations),
+    solves,
     hint: { x, unloaded: forceDeflection.unloaded, deflection: peak.deflection },
   };
 }

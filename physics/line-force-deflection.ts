@@ -26,6 +26,9 @@ export interface LineForceDeflection {
   /** The unloaded equilibrium there, and the one solved at deflection u. */
   unloaded: LineVariables;
   variablesAt: (u: number) => LineVariables;
+  /** Equilibria solved so far on this path (the unloaded one included) and their Newton iterations in all: what the
+   * starting points save shows here, never in the figures. */
+  effort: () => { solves: number; iterations: number };
 }
 
 const UNKNOWNS = ["H", "VA", "loadArc", "load"] as const;
@@ -85,8 +88,11 @@ export function lineForceDeflection(line: Line, length: number, x: number, break
   const condition = (u: number): LineEquation => ({ kind: "loadY", y: unloaded.loadY - u });
   const equations = (u: number): LineEquation[] => [{ kind: "span" }, { kind: "rise" }, { kind: "loadX", x }, condition(u)];
   // Every solved state keeps its tangent along the path, dv/du (the loadY target is y₀ − u: minus its sensitivity).
+  const effort = { solves: 1, iterations: unloaded.iterations };
   const solveAt = (u: number, guess: LineVariables) => {
-    const { variables, sensitivity: d } = solveEquilibrium(line, guess, UNKNOWNS, equations(u), "line force–deflection", 3);
+    const { variables, iterations, sensitivity: d } = solveEquilibrium(line, guess, UNKNOWNS, equations(u), "line force–deflection", 3);
+    effort.solves++;
+    effort.iterations += iterations;
     const tangent = d && { H: -d.H!, VA: -d.VA!, loadArc: -d.loadArc!, load: -d.load! };
     return { variables, tangent, energy: energyOf(variables), ...jumpOf(variables, tangent) };
   };
@@ -154,5 +160,5 @@ export function lineForceDeflection(line: Line, length: number, x: number, break
     return { u, load: end.variables.load, work, slope: end.variables.load + end.jump * end.tangent.loadArc - releasedRate, stiffness: end.tangent.load };
   };
   const variablesAt = (u: number) => solved(u).variables;
-  return { unloadedY: unloaded.loadY, unloaded: unloaded.variables, load, state, variablesAt };
+  return { unloadedY: unloaded.loadY, unloaded: unloaded.variables, load, state, variablesAt, effort: () => ({ ...effort }) };
 }

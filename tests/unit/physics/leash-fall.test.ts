@@ -92,3 +92,55 @@ describe("leash fall on a real line against a dense quadrature (independent mode
     });
   }
 });
+
+// The energy balance's steps on a linear spring P = k·u, work k·u²/2, whose root is known in closed form:
+// m·g·(h + δ) = k·δ²/2 gives δ = (m·g + √((m·g)² + 2·k·m·g·h)) / k (Meriam & Kraige, work–energy for a mass dropped on
+// a spring). Halley's steps (with dP/du) need fewer trials than Newton's (slope only), from any start: the counts
+// are the design's claim of cubic against quadratic convergence, measured on this case.
+describe("the energy balance's steps", () => {
+  const k = 20_000;
+  const mass = 80;
+  const h = 2;
+  const mg = mass * STANDARD_GRAVITY;
+  const root = (mg + Math.sqrt(mg ** 2 + 2 * k * mg * h)) / k;
+  const trials = (withSlope: boolean, withStiffness: boolean, guess?: number) => {
+    let calls = 0;
+    const peak = leashFallPeak(
+      mass,
+      h,
+      (u) => {
+        calls++;
+        return { u, load: k * u, work: (k * u * u) / 2, ...(withSlope ? { slope: k * u } : {}), ...(withStiffness ? { stiffness: k } : {}) };
+      },
+      guess,
+    );
+    expect(peak.deflection).toBeCloseTo(root, 9);
+    expect(peak.peakLoad).toBeCloseTo(k * root, 4);
+    return calls;
+  };
+
+  it("reach the closed-form root from any start, Halley's in fewer trials than Newton's", () => {
+    expect(trials(true, true, 0.3)).toBe(4);
+    expect(trials(true, false, 0.3)).toBe(5);
+    expect(trials(false, false, 0.3)).toBe(5);
+    expect(trials(true, true)).toBe(5);
+    expect(trials(true, false)).toBe(7);
+    expect(trials(true, true, 3)).toBe(6);
+    expect(trials(true, false, 3)).toBe(8);
+    // A start at or below zero is no start: the fall height is tried first.
+    expect(trials(true, true, 0)).toBe(trials(true, true));
+    expect(trials(true, true, -1)).toBe(trials(true, true));
+  });
+
+  it("refuses a mass of 0 and a fall past 100 m, and takes a fall of 0 m and of 100 m", () => {
+    const spring = (u: number) => ({ u, load: k * u, work: (k * u * u) / 2 });
+    expect(() => leashFallPeak(0, 1, spring)).toThrow(expect.objectContaining({ field: "leashFall.mass", allowed: "a mass > 0 kg" }));
+    expect(() => leashFallPeak(80, 100.01, spring)).toThrow(
+      expect.objectContaining({ field: "leashFall.fallHeight", allowed: "a free-fall height from 0 m to 100 m" }),
+    );
+    expect(() => leashFallPeak(80, -0.01, spring)).toThrow(expect.objectContaining({ field: "leashFall.fallHeight" }));
+    // A walker lowered onto the line (h = 0) stretches it twice the static deflection: δ = 2·m·g/k.
+    expect(leashFallPeak(80, 0, spring).deflection).toBeCloseTo((2 * mg) / k, 9);
+    expect(leashFallPeak(80, 100, spring).deflection).toBeCloseTo((mg + Math.sqrt(mg ** 2 + 2 * k * mg * 100)) / k, 9);
+  });
+});
