@@ -8,6 +8,7 @@ import { checkGround, groundHeightAt, type GroundPoint } from "./ground";
 import { catchOnLine, type CatchHint, type LineCatch } from "./line-catch";
 import type { Line, LineVariables } from "./line-equations";
 import { lineProfile, sagAt } from "./line-profile";
+import { nearestHints } from "./nearest-hint";
 import { parseRigInput } from "./parse-rig-input";
 import { analysePulleySystem, type PulleyAnalysis } from "./pulley-system";
 import { RigInputError } from "./rig-input-error";
@@ -163,15 +164,6 @@ function fallPosition(rig: RigInput, walkerX: number): number {
     rig.walker.positionM ?? rig.walker.positionFraction,
     "a position between the anchors, or a leash-fall position (leashFall.positionFraction, between 0 and 1) when the walker stands at an anchor",
   );
-}
-
-/** Starting points by position: the one solved nearest to x. */
-function nearestHints<T>() {
-  const known: { x: number; hint: T }[] = [];
-  return {
-    add: (x: number, hint: T) => void known.push({ x, hint }),
-    nearest: (x: number) => known.reduce<{ x: number; hint: T } | undefined>((a, b) => (a && Math.abs(a.x - x) <= Math.abs(b.x - x) ? a : b), undefined)?.hint,
-  };
 }
 
 /** The unloaded line's height above the ground at mid-span: what the rule of thumb speaks of. */

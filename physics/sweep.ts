@@ -19,10 +19,10 @@ export interface Sweep {
 }
 
 /**
- * The next position's start: the last three solutions, evenly spaced, extrapolated by the quadratic through
- * them (3a − 3b + c), so Newton usually needs a single step; with fewer, the last one or the line through two.
+ * The next position's start: the last three solutions (newest first), evenly spaced, extrapolated by the quadratic
+ * through them (3a − 3b + c), so Newton usually needs a single step; with fewer, the last one or the line through two.
  */
-function extrapolated(previous: readonly LineVariables[]): LineVariables | undefined {
+export function sweepStart(previous: readonly LineVariables[]): LineVariables | undefined {
   const [a, b, c] = previous;
   if (!a || !b) return a;
   const next = (key: "H" | "VA" | "loadArc") => (c ? 3 * a[key] - 3 * b[key] + c[key] : 2 * a[key] - b[key]);
@@ -35,7 +35,7 @@ export function sweepWalker(line: Line, length: number, force: number, breakingS
   const previous: LineVariables[] = [];
   for (let i = 0; i < count; i++) {
     const x = (line.span * i) / (count - 1);
-    const s = solveLine(line, length, { force, x }, breakingStrength, extrapolated(previous));
+    const s = solveLine(line, length, { force, x }, breakingStrength, sweepStart(previous));
     previous.unshift(s.variables);
     previous.length = Math.min(previous.length, 3);
     points.push({ x, tensionA: s.tensionA, tensionB: s.tensionB, sag: s.loadSag });
