@@ -6,11 +6,13 @@ import { format, resolveConfig } from "prettier";
 import {
   blockIn,
   inconsistencies,
+  meetsGoal,
   readmeBlock,
   readReport,
   readSummary,
   README_PATH,
   REPORT_PATH,
+  SCORE_GOAL_PCT,
   summarise,
   SUMMARY_PATH,
   type MutationSummary,
@@ -23,6 +25,7 @@ function print(s: MutationSummary) {
     `${s.mutants} mutants: ${s.killed} killed, ${s.timeout} timeout, ${s.survived} survived, ${s.noCoverage} no coverage, ` +
       `${s.compileError} compile errors, ${s.runtimeError} runtime errors, ${s.ignored} ignored`,
   );
+  console.log(`The goal, at least ${SCORE_GOAL_PCT} %, is ${meetsGoal(s) ? "met" : "not met"}.`);
   if (s.survivors.length > 0) console.log(`\nSurvivors (${s.survivors.length}):\n${s.survivors.map((m) => `  ${m}`).join("\n")}`);
 }
 
