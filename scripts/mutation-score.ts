@@ -18,7 +18,7 @@ import {
   type MutationSummary,
 } from "./mutation-summary";
 
-function print(s: MutationSummary) {
+function print(s: MutationSummary, { survivors }: { survivors: boolean }) {
   const valid = s.killed + s.timeout + s.survived + s.noCoverage;
   console.log(`Mutation score of physics/: ${s.scorePct.toFixed(2)} % (${s.killed + s.timeout} of ${valid} valid mutants killed or timed out)`);
   console.log(
@@ -26,7 +26,7 @@ function print(s: MutationSummary) {
       `${s.compileError} compile errors, ${s.runtimeError} runtime errors, ${s.ignored} ignored`,
   );
   console.log(`The goal, at least ${SCORE_GOAL_PCT} %, is ${meetsGoal(s) ? "met" : "not met"}.`);
-  if (s.survivors.length > 0) console.log(`\nSurvivors (${s.survivors.length}):\n${s.survivors.map((m) => `  ${m}`).join("\n")}`);
+  if (survivors && s.survivors.length > 0) console.log(`\nSurvivors (${s.survivors.length}):\n${s.survivors.map((m) => `  ${m}`).join("\n")}`);
 }
 
 /** Written as `npm run format` would leave it, so prettier --check passes on what this script writes. */
@@ -57,7 +57,7 @@ async function main() {
       console.error(problems.join("\n"));
       process.exit(1);
     }
-    print(readSummary());
+    print(readSummary(), { survivors: false });
     console.log("\nThe README, the summary and the report agree.");
   } else {
     if (!existsSync(REPORT_PATH)) {
@@ -65,7 +65,7 @@ async function main() {
       process.exit(1);
     }
     const summary = summarise(readReport());
-    print(summary);
+    print(summary, { survivors: true });
     await writeFormatted(SUMMARY_PATH, JSON.stringify(summary, null, 2));
     const readme = readFileSync(README_PATH, "utf8");
     const block = blockIn(readme);

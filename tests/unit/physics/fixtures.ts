@@ -1,5 +1,5 @@
 // Invented demo gear for the tests (no real products): a stretchy and a stiff webbing.
-import { createStretchCurve, STANDARD_GRAVITY, type Line, type StretchPoint } from "../../../physics";
+import { createStretchCurve, RigInputError, STANDARD_GRAVITY, type Line, type StretchPoint } from "../../../physics";
 
 export const STRETCHY: StretchPoint[] = [
   { tensionKN: 0, elongationPct: 0 },
@@ -24,4 +24,15 @@ export const MBS = 30000;
 
 export function relative(a: number, b: number): number {
   return Math.abs(a - b) / Math.abs(b);
+}
+
+/** The RigInputError a call raises (any other error, or none, fails the test). */
+export function refusalOf(call: () => unknown): RigInputError {
+  try {
+    call();
+  } catch (error) {
+    if (error instanceof RigInputError) return error;
+    throw error;
+  }
+  throw new Error("expected a RigInputError");
 }

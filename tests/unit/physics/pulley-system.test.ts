@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { analysePulleySystem, RigInputError } from "../../../physics";
+import { refusalOf } from "./fixtures";
 
 describe("analysePulleySystem", () => {
   // Hauling MA 1 + e + e² for a 3:1 with sheave efficiency e: common practice in rope-rescue training, no single
@@ -48,14 +49,6 @@ describe("analysePulleySystem", () => {
 describe("analysePulleySystem at the edges of its inputs", () => {
   const system = (stages: unknown, sheaveEfficiency: number, brake: { on: "tail" } | { on: "stage"; stage: number } = { on: "tail" }) =>
     ({ stages, sheaveEfficiency, brake }) as Parameters<typeof analysePulleySystem>[0];
-  const refusal = (run: () => unknown) => {
-    try {
-      run();
-    } catch (error) {
-      return error as RigInputError;
-    }
-    throw new Error("expected a RigInputError");
-  };
 
   it("takes 1:1 and 20:1 stages, refuses 0:1, 21:1, a fraction and no list", () => {
     expect(analysePulleySystem(system([1], 0.9), 1000, 500)).toMatchObject({
@@ -67,17 +60,17 @@ describe("analysePulleySystem at the edges of its inputs", () => {
     });
     expect(analysePulleySystem(system([20], 1), 1000, 500).idealAdvantage).toBe(20);
     for (const bad of [0, 21, 2.5]) {
-      const error = refusal(() => analysePulleySystem(system([3, bad], 0.9), 1000, 500));
+      const error = refusalOf(() => analysePulleySystem(system([3, bad], 0.9), 1000, 500));
       expect(error).toMatchObject({ field: "tensioning.stages.1.ratio", allowed: "a whole number from 1 to 20 (n of an n:1 stage)" });
     }
-    expect(refusal(() => analysePulleySystem(system("3:1", 0.9), 1000, 500))).toMatchObject({ field: "tensioning.stages", allowed: "at least one stage" });
+    expect(refusalOf(() => analysePulleySystem(system("3:1", 0.9), 1000, 500))).toMatchObject({ field: "tensioning.stages", allowed: "at least one stage" });
   });
 
   it("takes a sheave efficiency above 0 up to 1, refuses 0 and above 1", () => {
     expect(analysePulleySystem(system([2], 1), 1000, 500).haulingAdvantage).toBe(2);
     expect(analysePulleySystem(system([2], 0.01), 1000, 500).haulingAdvantage).toBeCloseTo(1.01, 12);
     for (const bad of [0, 1.0001]) {
-      expect(refusal(() => analysePulleySystem(system([2], bad), 1000, 500))).toMatchObject({
+      expect(refusalOf(() => analysePulleySystem(system([2], bad), 1000, 500))).toMatchObject({
         field: "tensioning.sheaveEfficiency",
         allowed: "a fraction > 0 and ≤ 1",
       });
@@ -89,7 +82,7 @@ describe("analysePulleySystem at the edges of its inputs", () => {
     expect(analysePulleySystem(system([5, 3, 2], 1, { on: "stage", stage: 2 }), 3000, 500).brakeAdvantage).toBe(30);
     expect(analysePulleySystem(system([5, 3, 2], 1), 3000, 500).brakeAdvantage).toBe(30);
     for (const bad of [-1, 3, 0.5]) {
-      expect(refusal(() => analysePulleySystem(system([5, 3, 2], 1, { on: "stage", stage: bad }), 3000, 500))).toMatchObject({
+      expect(refusalOf(() => analysePulleySystem(system([5, 3, 2], 1, { on: "stage", stage: bad }), 3000, 500))).toMatchObject({
         field: "tensioning.brake.stage",
         allowed: "a stage index from 0 (the stage on the line) to 2",
       });
@@ -98,7 +91,7 @@ describe("analysePulleySystem at the edges of its inputs", () => {
 
   it("needs a pull per person above 0 N, and rounds the crew up: 1000 N at 500 N each is 2, at 499 N each 3", () => {
     expect(analysePulleySystem(system([1], 1), 1000, 499).peopleNeeded).toBe(3);
-    expect(refusal(() => analysePulleySystem(system([1], 1), 1000, 0))).toMatchObject({
+    expect(refusalOf(() => analysePulleySystem(system([1], 1), 1000, 0))).toMatchObject({
       field: "tensioning.pullPerPersonN",
       allowed: "a pull per person > 0 N",
     });

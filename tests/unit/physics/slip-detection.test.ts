@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { detectSlip, RigInputError } from "../../../physics";
+import { refusalOf } from "./fixtures";
 
 /** Small deterministic generator (mulberry32) for reproducible noise. */
 function noise(seed: number) {
@@ -62,5 +63,31 @@ describe("detectSlip", () => {
     expect(() => detectSlip({ time: [0, 1], force: [1, NaN] }, 10)).toThrow(RigInputError);
     expect(() => detectSlip({ time: [0, 1], force: [1] }, 10)).toThrow(RigInputError);
     expect(() => detectSlip({ time: [0, 1], force: [1, 2] }, 0)).toThrow(RigInputError);
+  });
+
+  // The refusals' own words (the product's, written for this engine): the field, what was given and what is allowed.
+  it("says which sample or setting is wrong, what it was and what is allowed", () => {
+    expect(refusalOf(() => detectSlip({ time: [0], force: [1] }, 10))).toMatchObject({
+      field: "trace",
+      given: '"1 times and 1 forces"',
+      allowed: "at least two samples, as many times as forces",
+    });
+    expect(refusalOf(() => detectSlip({ time: [0, 1], force: [1] }, 10))).toMatchObject({ field: "trace", given: '"2 times and 1 forces"' });
+    expect(refusalOf(() => detectSlip({ time: [0, 1], force: [1, 2] }, -5))).toMatchObject({ field: "drop", given: "-5", allowed: "a drop > 0 N" });
+    expect(refusalOf(() => detectSlip({ time: [0, 1], force: [1, 2] }, 10, NaN))).toMatchObject({
+      field: "pullEndS",
+      given: "NaN",
+      allowed: "a time in seconds",
+    });
+    expect(refusalOf(() => detectSlip({ time: [0, 2, 1], force: [1, 2, 3] }, 10))).toMatchObject({
+      field: "trace.time.2",
+      given: "1",
+      allowed: "finite times, strictly increasing",
+    });
+    expect(refusalOf(() => detectSlip({ time: [0, 1], force: [1, Infinity] }, 10))).toMatchObject({
+      field: "trace.force.1",
+      given: "Infinity",
+      allowed: "a finite force in N",
+    });
   });
 });
