@@ -33,10 +33,10 @@ export function roundTowards(value: number, decimals: number, rounding: Rounding
   return whole / scale;
 }
 
-/** `value` rounded to `decimals` places in the given direction, as digits; never "-0.00". */
+/** `value` rounded to `decimals` places in the given direction, as digits; never "-0.00" (toFixed writes a minus only
+ * for a value below 0, and −0 is not: ECMA-262, Number.prototype.toFixed). */
 export function fixedDigits(value: number, decimals: number, rounding: Rounding): string {
-  const rounded = roundTowards(value, decimals, rounding);
-  return (rounded === 0 ? 0 : rounded).toFixed(decimals);
+  return roundTowards(value, decimals, rounding).toFixed(decimals);
 }
 
 /** The digits of a figure in its unit, without the unit. */

@@ -1,17 +1,20 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import {
+  backupCatchMissing,
   backupFreeFall,
   backupLine,
   createStretchCurve,
+  fixedDigits,
   evaluateRig,
   leashFallPeak,
   lineForceDeflection,
   parseRigInput,
+  shortestLength,
   solveLine,
   STANDARD_GRAVITY,
 } from "../../../physics";
-import { relative } from "./fixtures";
+import { refusalOf, relative } from "./fixtures";
 import { manyNodeLine, solveManyNodeLine } from "./reference/many-node-line";
 
 const withGround = JSON.parse(readFileSync(new URL("../../../physics/examples/quarry-highline-ground.json", import.meta.url), "utf8"));
@@ -112,6 +115,41 @@ describe("the backup catch", () => {
     expect(result.clearance.backupCatch).toBeNull();
     expect(result.backupCatchMissing).toMatch(/No stretch points for the backup/);
     expect(result.safetyFactors.some((f) => f.location === "backup")).toBe(false);
+  });
+
+  it("is not worked out with no backup at all, and says so", () => {
+    expect(backupCatchMissing(parseRigInput({ ...withGround, backup: undefined }))).toBe("No backup given: its catch is not worked out.");
+    expect(backupCatchMissing(parseRigInput(withGround))).toBeNull();
+  });
+
+  // The backup must reach the anchors without passing its MBS: at its shortest length it hangs at exactly that
+  // (shortestLength, checked in solve-line's tests). Equal is allowed, shorter is refused with the least slack.
+  it("refuses a slack that leaves the backup shorter than its shortest length, stating the least slack", () => {
+    const rig = parseRigInput(withGround);
+    const line = {
+      span: rig.spanM,
+      rise: rig.heightDifferenceM,
+      weight: rig.backup!.massPerMetreKg * STANDARD_GRAVITY,
+      curve: createStretchCurve(rig.backup!.stretchPoints!),
+    };
+    const shortest = shortestLength(line, rig.backup!.mbsN);
+    const slackM = rig.backup!.slackM!;
+    expect(backupLine(rig, shortest - slackM)!.length).toBe(shortest);
+    const mainLength = shortest - slackM - 0.01;
+    expect(refusalOf(() => backupLine(rig, mainLength))).toMatchObject({
+      field: "backup.slackM",
+      given: String(slackM),
+      allowed: `a slack of at least ${fixedDigits(shortest - mainLength, 3, "up")} m: any less and the backup alone would stretch past its MBS to reach the anchors`,
+    });
+  });
+
+  it("refuses a fall onto the backup of more than 100 m, naming the slack; 100 m itself is taken", () => {
+    expect(backupFreeFall(2, 0, -98, 3)).toBe(100);
+    expect(refusalOf(() => backupFreeFall(2, 0, -98.5, 3))).toMatchObject({
+      field: "backup.slackM",
+      given: "3",
+      allowed: "a slack that keeps the fall onto the backup within 100 m",
+    });
   });
 
   it("is null without the backup's slack, and says so (a rig saved before the slack was asked for still evaluates)", () => {
