@@ -58,7 +58,8 @@ export function analysePulleySystem(system: PulleySystem, lineTension: number, p
   const idealAdvantage = system.stages.reduce((a, n) => a * n, 1);
   const haulingAdvantage = system.stages.reduce((a, n) => a * stageHaulingAdvantage(n, system.sheaveEfficiency), 1);
   const haulForce = lineTension / haulingAdvantage;
-  const upTo = system.brake.on === "tail" ? system.stages.length - 1 : system.brake.stage;
-  const brakeAdvantage = system.stages.slice(0, upTo + 1).reduce((a, n) => a * n, 1);
+  // A brake on the tail holds behind every stage; one on a stage, behind that stage and those nearer the line.
+  const braked = system.brake.on === "tail" ? system.stages : system.stages.slice(0, system.brake.stage + 1);
+  const brakeAdvantage = braked.reduce((a, n) => a * n, 1);
   return { idealAdvantage, haulingAdvantage, haulForce, peopleNeeded: Math.ceil(haulForce / pullPerPerson), brakeAdvantage };
 }
