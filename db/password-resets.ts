@@ -17,13 +17,18 @@ async function whyNotUsable(trx: Knex.Transaction, tokenHash: string): Promise<R
 
 /**
  * Spends a reset token (valid once, within the hour it was issued) and sets the new password in the
- * same transaction. The token is claimed by one conditional UPDATE, so parallel requests with the same
- * token never wait on each other's locks; every query runs on the transaction's own connection, since a
- * query on the pool from inside a transaction needs a second connection and many at once drain the pool.
- * The person's other unused links are spent too, and every session ends: whoever knew the old password may be signed in.
+ * same transaction. The person's row is locked first, so resets of one person run one after another: two
+ * of their links opened at once would otherwise each hold its own link's row and wait for the other's
+ * (a deadlock). The token is then claimed by one conditional UPDATE; every query runs on the transaction's
+ * own connection, since a query on the pool from inside a transaction needs a second connection and many at
+ * once drain the pool. The person's other unused links are spent too, and every session ends: whoever knew
+ * the old password may be signed in.
  */
 export async function resetPassword(tokenHash: string, passwordHash: string): Promise<ResetOutcome> {
   return db.transaction(async (trx) => {
+    const owner = trx("password_resets").where({ token_hash: tokenHash }).select("user_id");
+    const person = await trx("users").whereIn("id", owner).forUpdate().first("id");
+    if (!person) return { outcome: "unknown" };
     const claimed: { user_id: string }[] = await trx("password_resets")
       .where({ token_hash: tokenHash })
       .whereNull("used_at")
