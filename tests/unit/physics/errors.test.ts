@@ -3,6 +3,7 @@ import rigExample from "@/physics/examples/quarry-highline.json";
 import { checkNumber } from "../../../physics/check-number";
 import { parseRigInput } from "../../../physics/parse-rig-input";
 import { RigInputError, SolveError } from "../../../physics";
+import { refusalOf } from "./fixtures";
 
 // The engine's two refusals, as the app shows them (its route handlers send toJSON): the product's own wording.
 describe("RigInputError", () => {
@@ -72,15 +73,7 @@ describe("SolveError", () => {
 // and what the field takes in words (the product's own), or the schema's own sentence where it has one.
 describe("parseRigInput's refusals", () => {
   const example = () => structuredClone(rigExample) as Record<string, unknown>;
-  const refusal = (input: unknown) => {
-    try {
-      parseRigInput(input);
-    } catch (error) {
-      expect(error).toBeInstanceOf(RigInputError);
-      return error as RigInputError;
-    }
-    throw new Error("expected a refusal");
-  };
+  const refusal = (input: unknown) => refusalOf(() => parseRigInput(input));
 
   it("names the whole input when it is not a group of fields", () => {
     expect(refusal(null)).toMatchObject({ field: "(the whole input)", given: "null", allowed: "its fields, given together as one group" });

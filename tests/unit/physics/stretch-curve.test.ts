@@ -1,6 +1,6 @@
 import { beforeEach, describe, expect, it } from "vitest";
 import { createStretchCurve, pieceAt, RigInputError, strainAt, tensionAtStrain, type StretchCurve, type StretchPoint } from "../../../physics";
-import { STRETCHY } from "./fixtures";
+import { refusalOf, STRETCHY } from "./fixtures";
 
 describe("createStretchCurve / strainAt", () => {
   // Built in each test, not once in the describe body, so mutation testing sees which tests run it.
@@ -80,13 +80,8 @@ describe("createStretchCurve / strainAt", () => {
 // The curve's refusals word for word (the product's own words), each at the edge it guards, under the field name given.
 describe("createStretchCurve's refusals at their edges", () => {
   const refusal = (points: unknown, field?: string) => {
-    try {
-      createStretchCurve(points as StretchPoint[], field);
-    } catch (error) {
-      const { field: named, allowed } = error as RigInputError;
-      return { field: named, allowed };
-    }
-    throw new Error("expected a refusal");
+    const { field: named, allowed } = refusalOf(() => createStretchCurve(points as StretchPoint[], field));
+    return { field: named, allowed };
   };
   const origin = { tensionKN: 0, elongationPct: 0 };
 
