@@ -1,3 +1,5 @@
+import { goldenSectionMinimum } from "./golden-section";
+
 /**
  * The trade's rule of thumb for how high to rig a highline: at least a third of its length plus 3 m above
  * the ground, or a fall held only by the backup may reach it. The length is taken as the span.
@@ -15,9 +17,10 @@ const SCAN = [0.02, 0.1, 0.25, 0.5, 0.75, 0.9, 0.98];
 /** Fall positions searched: from 1 % to 99 % of the span (the line cannot deflect at an anchor). */
 const FIRST = 0.01;
 const LAST = 0.99;
-/** Step of the search over the interpolated lowest point, and of the exact check on either side of its minimum, shares of the span. */
+/** Step of the search over the interpolated lowest point, share of the span. */
 const SEARCH_STEP = 0.005;
-const CHECK_STEP = 0.01;
+/** How closely the exact search pins the lowest clearance's position, share of the span (12 cm on 120 m). */
+const EXACT_TOLERANCE = 0.001;
 
 export interface LowestClearance {
   clearanceM: number;
@@ -25,8 +28,9 @@ export interface LowestClearance {
 }
 
 /**
- * Piecewise cubic Hermite interpolation with the Fritsch–Carlson slopes (Fritsch & Carlson, "Monotone
- * piecewise cubic interpolation", SIAM J. Numer. Anal. 17, 1980): no overshoot between the knots.
+ * Piecewise cubic Hermite interpolation that keeps monotone data monotone (Fritsch & Carlson, "Monotone piecewise
+ * cubic interpolation", SIAM J. Numer. Anal. 17, 1980): at an inner point the slope is the weighted harmonic mean
+ * of the secants either side (Fritsch & Butland 1984), zero where the data turn; at an end, its interval's secant.
  */
 export function monotoneCubic(xs: readonly number[], ys: readonly number[]): (x: number) => number {
   const n = xs.length;
@@ -55,9 +59,11 @@ export function monotoneCubic(xs: readonly number[], ys: readonly number[]): (x:
  * walker's lowest point after a fall at x, worked out exactly (a whole catch each), so it is called at few
  * positions: at the scan above, in order along the span; then its monotone interpolation through those and
  * the anchors (where the walker hangs `hangAtAnchors` below each anchor) is searched against the ground at
- * every half per cent of the span and at every ground point; the best of those and the positions one per
- * cent either side are worked out exactly. The answer is the lowest exact clearance found: a figure of a
- * real fall position, never an interpolated one.
+ * every half per cent of the span and at every ground point for the most likely position. That position is
+ * worked out exactly, and so is a golden-section search between the scan positions either side of it: the
+ * interpolation places a low point only at a scan position or a ground point (it never overshoots), while on
+ * a line with a height difference the real one lies between them. The answer is the lowest exact clearance
+ * found: a figure of a real fall position, never an interpolated one.
  */
 export function lowestClearance(
   span: number,
@@ -78,12 +84,18 @@ export function lowestClearance(
   };
   const scanXs = SCAN.map((f) => f * span);
   const scanLowest = scanXs.map((x) => clearanceAt(x) + groundAt(x));
-  const estimate = monotoneCubic([0, ...scanXs, span], [-hangAtAnchors, ...scanLowest, rise - hangAtAnchors]);
+  const knots = [0, ...scanXs, span];
+  const estimate = monotoneCubic(knots, [-hangAtAnchors, ...scanLowest, rise - hangAtAnchors]);
   const candidates = [...groundXs.filter((x) => x > FIRST * span && x < LAST * span)];
-  for (let f = FIRST; f <= LAST + 1e-9; f += SEARCH_STEP) candidates.push(Math.min(f, LAST) * span);
+  const steps = Math.round((LAST - FIRST) / SEARCH_STEP);
+  for (let i = 0; i <= steps; i++) candidates.push((FIRST + i * SEARCH_STEP) * span);
   let best = candidates[0];
   for (const x of candidates) if (estimate(x) - groundAt(x) < estimate(best) - groundAt(best)) best = x;
-  for (const x of [best - CHECK_STEP * span, best, best + CHECK_STEP * span]) clearanceAt(Math.min(Math.max(x, FIRST * span), LAST * span));
+  clearanceAt(best);
+  // Between the scan positions either side of the one nearest the best: the real low point lies there.
+  const nearest = knots.reduce((k, x, i) => (Math.abs(x - best) < Math.abs(knots[k] - best) ? i : k), 1);
+  const k = Math.min(Math.max(nearest, 1), knots.length - 2);
+  goldenSectionMinimum(clearanceAt, Math.max(knots[k - 1], FIRST * span), Math.min(knots[k + 1], LAST * span), EXACT_TOLERANCE * span);
   let result: LowestClearance = { clearanceM: Infinity, positionM: NaN };
   for (const [x, c] of exact) if (c < result.clearanceM) result = { clearanceM: c, positionM: x };
   return result;

@@ -1,0 +1,189 @@
+import { readFileSync } from "node:fs";
+import { describe, expect, it } from "vitest";
+import { evaluateRig, lowestClearance, monotoneCubic } from "../../../physics";
+import { goldenSectionMinimum } from "../../../physics/golden-section";
+
+/** Calls of f, in order, so a test can see where a search looked. */
+function recorded(f: (x: number) => number): { f: (x: number) => number; calls: number[] } {
+  const calls: number[] = [];
+  return {
+    calls,
+    f: (x) => {
+      calls.push(x);
+      return f(x);
+    },
+  };
+}
+
+/** Evaluations a golden-section search makes: two, then one a step until the interval is within the tolerance. */
+function goldenEvaluations(width: number, tolerance: number): number {
+  return 2 + Math.ceil(Math.log(tolerance / width) / Math.log((Math.sqrt(5) - 1) / 2));
+}
+
+describe("golden-section search (Kiefer 1953; Press et al., Numerical Recipes, 3rd ed., §10.2)", () => {
+  it("finds the vertex of a parabola, x = 0.3 for (x − 0.3)², to its tolerance", () => {
+    expect(goldenSectionMinimum((x) => (x - 0.3) ** 2, 0, 1, 1e-6)).toBeCloseTo(0.3, 6);
+    expect(goldenSectionMinimum((x) => (x + 4.2) ** 2 + 7, -10, 3, 1e-7)).toBeCloseTo(-4.2, 7);
+  });
+
+  it("shrinks the interval by 1/φ with each new evaluation: 31 evaluations from width 1 to 10⁻⁶", () => {
+    const { f, calls } = recorded((x) => (x - 0.3) ** 2);
+    goldenSectionMinimum(f, 0, 1, 1e-6);
+    expect(goldenEvaluations(1, 1e-6)).toBe(31);
+    expect(calls).toHaveLength(31);
+    // Every evaluation stays inside the interval, and the first two sit at the golden sections of it.
+    for (const x of calls) expect(x > 0 && x < 1).toBe(true);
+    expect(calls[0]).toBeCloseTo((3 - Math.sqrt(5)) / 2, 12);
+    expect(calls[1]).toBeCloseTo((Math.sqrt(5) - 1) / 2, 12);
+  });
+
+  it("closes in on a kink and on either end of a monotone function", () => {
+    expect(goldenSectionMinimum((x) => Math.abs(x - 0.7), 0, 1, 1e-9)).toBeCloseTo(0.7, 8);
+    expect(goldenSectionMinimum((x) => x, 2, 5, 1e-9)).toBeCloseTo(2, 8);
+    expect(goldenSectionMinimum((x) => -x, 2, 5, 1e-9)).toBeCloseTo(5, 8);
+  });
+});
+
+describe("the monotone cubic that guides the clearance search", () => {
+  // Slopes by the weighted harmonic mean of the neighbouring secants, w₁ = 2hₖ + hₖ₋₁, w₂ = hₖ + 2hₖ₋₁ (Fritsch &
+  // Butland 1984, as in Moler, Numerical Computing with MATLAB, §3.4), zero where the data turn, the end interval's
+  // secant at the ends; values from the cubic Hermite basis. Worked by hand for xs = 0, 1, 3 and ys = 0, 2, 3:
+  // secants 2 and 0.5, slope at x = 1: 9 / (5/2 + 4/0.5) = 6/7.
+  const f = monotoneCubic([0, 1, 3], [0, 2, 3]);
+
+  it("passes through its points", () => {
+    expect(f(0)).toBe(0);
+    expect(f(1)).toBeCloseTo(2, 14);
+    expect(f(3)).toBeCloseTo(3, 14);
+  });
+
+  it("matches the hand-worked values between them: 1.142857 at x = 0.5, 2.589286 at x = 2", () => {
+    // x = 0.5 (t = ½, h = 1): ½·0 + ⅛·1·2 + ½·2 − ⅛·1·(6/7); x = 2 (t = ½, h = 2): ½·2 + ⅛·2·(6/7) + ½·3 − ⅛·2·0.5.
+    expect(f(0.5)).toBeCloseTo(0.25 + 1 - 0.75 / 7, 12);
+    expect(f(2)).toBeCloseTo(1 + 1.5 / 7 + 1.5 - 0.125, 12);
+  });
+
+  it("has the hand-worked slopes at its points: 2 at x = 0, 6/7 at x = 1, 0.5 at x = 3", () => {
+    const slope = (x: number, h: number) => (f(x + h) - f(x - h)) / (2 * h);
+    expect((f(1e-6) - f(0)) / 1e-6).toBeCloseTo(2, 5);
+    expect(slope(1, 1e-7)).toBeCloseTo(6 / 7, 5);
+    expect((f(3) - f(3 - 1e-6)) / 1e-6).toBeCloseTo(0.5, 5);
+  });
+
+  it("reproduces a straight line exactly on uneven points", () => {
+    const line = monotoneCubic([0, 0.5, 2, 2.2, 5], [1, 2, 5, 5.4, 11]);
+    for (let x = 0; x <= 5; x += 0.125) expect(line(x)).toBeCloseTo(1 + 2 * x, 12);
+  });
+
+  it("is flat where the data turn, so it never rises above a peak or dips below a trough between its points", () => {
+    const peak = monotoneCubic([0, 1, 2.5], [0, 1, 0.2]);
+    for (let x = 0; x <= 2.5; x += 0.01) expect(peak(x)).toBeLessThanOrEqual(1 + 1e-12);
+    expect((peak(1 + 1e-7) - peak(1 - 1e-7)) / 2e-7).toBeCloseTo(0, 5);
+  });
+});
+
+describe("the search for the lowest clearance over the span", () => {
+  const span = 120;
+  const hang = 2;
+  const level = () => -40;
+  /**
+   * A walker's lowest point after a fall at x on a line rising `rise` from A to B: the chord, less a deflection
+   * of 40·f(1 − f) m (f = x / span), less the hang. Its lowest point is the parabola's vertex, f = (40 − rise)/80
+   * (closed form): for the rises tested, 47, 35, 84 and 6 % of the span, between the scan positions.
+   */
+  const parabola = (rise: number) => (x: number) => {
+    const f = x / span;
+    return rise * f - 40 * f * (1 - f) - hang;
+  };
+
+  it.each([2.5, 12, -27, 35])("on a line rising %s m over level ground, finds the vertex of the lowest point, not a scan position", (rise) => {
+    const r = lowestClearance(span, rise, hang, level, [0, span], parabola(rise));
+    const vertex = ((40 - rise) / 80) * span;
+    expect(Math.abs(r.positionM - vertex)).toBeLessThan(0.001 * span);
+    expect(r.clearanceM).toBeCloseTo(parabola(rise)(vertex) + 40, 4);
+  });
+
+  it("works each position out once, the scan positions first and in order along the span, then within 1 % to 99 %", () => {
+    const { f, calls } = recorded(parabola(2.5));
+    lowestClearance(span, 2.5, hang, level, [0, span], f);
+    expect(calls.slice(0, 7)).toEqual([0.02, 0.1, 0.25, 0.5, 0.75, 0.9, 0.98].map((share) => share * span));
+    expect(new Set(calls).size).toBe(calls.length);
+    for (const x of calls) expect(x >= 0.01 * span && x <= 0.99 * span).toBe(true);
+    // The scan, the guide's best, and a golden-section search at most half the span wide to 0.1 % of it.
+    expect(calls.length).toBeLessThanOrEqual(7 + 1 + goldenEvaluations(0.5, 0.001));
+  });
+
+  it("finds a narrow rock under the line at its top, a ground point between the scan positions", () => {
+    // Level ground at −40 m but for a rock rising to −12 m at 76 m (63.3 % of the span).
+    const ground = [
+      { x: 0, y: -40 },
+      { x: 74.4, y: -40 },
+      { x: 76, y: -12 },
+      { x: 76.8, y: -40 },
+      { x: span, y: -40 },
+    ];
+    const groundAt = (x: number) => {
+      const k = ground.findIndex((p) => p.x >= x);
+      if (k <= 0) return ground[0].y;
+      const [a, b] = [ground[k - 1], ground[k]];
+      return a.y + ((b.y - a.y) * (x - a.x)) / (b.x - a.x);
+    };
+    const lowest = parabola(0);
+    const r = lowestClearance(
+      span,
+      0,
+      hang,
+      groundAt,
+      ground.map((p) => p.x),
+      lowest,
+    );
+    expect(r.positionM).toBe(76);
+    expect(r.clearanceM).toBeCloseTo(lowest(76) + 12, 12);
+    // A scan of exact clearances every 0.05 % of the span finds nothing lower (independent search in the test).
+    for (let f = 0.01; f <= 0.99; f += 0.0005) expect(lowest(f * span) - groundAt(f * span)).toBeGreaterThanOrEqual(r.clearanceM - 1e-9);
+  });
+
+  it("leaves out ground points closer to an anchor than 1 % of the span, where no fall is worked out", () => {
+    // A ledge 0.48 m from A reaching up to 2 m below it, level ground from 0.72 m on: the search is as over level ground.
+    const ledge = [
+      { x: 0.48, y: -2 },
+      { x: 0.72, y: -40 },
+    ];
+    const groundAt = (x: number) => (x <= 0.48 ? -2 : x >= 0.72 ? -40 : -2 - (38 * (x - 0.48)) / 0.24);
+    const withLedge = lowestClearance(
+      span,
+      2.5,
+      hang,
+      groundAt,
+      ledge.map((p) => p.x),
+      parabola(2.5),
+    );
+    expect(withLedge).toEqual(lowestClearance(span, 2.5, hang, level, [0, span], parabola(2.5)));
+  });
+});
+
+describe("the lowest clearance of the demo rig over level ground, with B 20 m above A", () => {
+  const example = JSON.parse(readFileSync(new URL("../../../physics/examples/quarry-highline.json", import.meta.url), "utf8"));
+  const rig = {
+    ...example,
+    heightDifferenceM: 20,
+    ground: {
+      points: [
+        { xM: 0, heightM: -40 },
+        { xM: example.spanM, heightM: -40 },
+      ],
+    },
+  };
+
+  // About 400 whole evaluations: a generous timeout for a loaded machine (no speed is asserted here).
+  it("is within 1 mm of a scan of exact catches every 0.25 % of the span, and no higher than its lowest (independent search in the test)", () => {
+    const found = evaluateRig(rig).clearance.leashFall!;
+    let lowest = Infinity;
+    for (let i = 0; i <= 392; i++) {
+      const there = evaluateRig({ ...rig, leashFall: { ...rig.leashFall, positionFraction: 0.01 + i * 0.0025 } });
+      lowest = Math.min(lowest, there.leashFall.groundClearanceM!);
+    }
+    expect(found.clearanceM).toBeLessThanOrEqual(lowest + 1e-9);
+    expect(found.clearanceM).toBeGreaterThan(lowest - 0.001);
+  }, 120_000);
+});
