@@ -15,6 +15,17 @@ function recorded(f: (x: number) => number): { f: (x: number) => number; calls: 
   };
 }
 
+/** Ground linear between its points and level beyond them, as the engine's ground (hand-written here). */
+function groundThrough(points: { x: number; y: number }[]): (x: number) => number {
+  return (x) => {
+    const k = points.findIndex((p) => p.x >= x);
+    if (k === 0) return points[0].y;
+    if (k < 0) return points[points.length - 1].y;
+    const [a, b] = [points[k - 1], points[k]];
+    return a.y + ((b.y - a.y) * (x - a.x)) / (b.x - a.x);
+  };
+}
+
 /** Evaluations a golden-section search makes: two, then one a step until the interval is within the tolerance. */
 function goldenEvaluations(width: number, tolerance: number): number {
   return 2 + Math.ceil(Math.log(tolerance / width) / Math.log((Math.sqrt(5) - 1) / 2));
@@ -37,6 +48,15 @@ describe("golden-section search (Kiefer 1953; Press et al., Numerical Recipes, 3
     expect(calls[1]).toBeCloseTo((Math.sqrt(5) - 1) / 2, 12);
   });
 
+  it("returns the position of the lowest value it evaluated, even with a coarse tolerance", () => {
+    for (const vertex of [0.2, 0.45, 0.8]) {
+      const { f, calls } = recorded((x) => (x - vertex) ** 2);
+      const x = goldenSectionMinimum(f, 0, 1, 0.2);
+      expect(calls).toContain(x);
+      expect(f(x)).toBe(Math.min(...calls.map((c) => (c - vertex) ** 2)));
+    }
+  });
+
   it("closes in on a kink and on either end of a monotone function", () => {
     expect(goldenSectionMinimum((x) => Math.abs(x - 0.7), 0, 1, 1e-9)).toBeCloseTo(0.7, 8);
     expect(goldenSectionMinimum((x) => x, 2, 5, 1e-9)).toBeCloseTo(2, 8);
@@ -49,21 +69,25 @@ describe("the monotone cubic that guides the clearance search", () => {
   // Butland 1984, as in Moler, Numerical Computing with MATLAB, §3.4), zero where the data turn, the end interval's
   // secant at the ends; values from the cubic Hermite basis. Worked by hand for xs = 0, 1, 3 and ys = 0, 2, 3:
   // secants 2 and 0.5, slope at x = 1: 9 / (5/2 + 4/0.5) = 6/7.
-  const f = monotoneCubic([0, 1, 3], [0, 2, 3]);
+  // Built in each test, not once in the describe body, so mutation testing sees which tests run it.
+  const handWorked = () => monotoneCubic([0, 1, 3], [0, 2, 3]);
 
   it("passes through its points", () => {
+    const f = handWorked();
     expect(f(0)).toBe(0);
     expect(f(1)).toBeCloseTo(2, 14);
     expect(f(3)).toBeCloseTo(3, 14);
   });
 
   it("matches the hand-worked values between them: 1.142857 at x = 0.5, 2.589286 at x = 2", () => {
+    const f = handWorked();
     // x = 0.5 (t = ½, h = 1): ½·0 + ⅛·1·2 + ½·2 − ⅛·1·(6/7); x = 2 (t = ½, h = 2): ½·2 + ⅛·2·(6/7) + ½·3 − ⅛·2·0.5.
     expect(f(0.5)).toBeCloseTo(0.25 + 1 - 0.75 / 7, 12);
     expect(f(2)).toBeCloseTo(1 + 1.5 / 7 + 1.5 - 0.125, 12);
   });
 
   it("has the hand-worked slopes at its points: 2 at x = 0, 6/7 at x = 1, 0.5 at x = 3", () => {
+    const f = handWorked();
     const slope = (x: number, h: number) => (f(x + h) - f(x - h)) / (2 * h);
     expect((f(1e-6) - f(0)) / 1e-6).toBeCloseTo(2, 5);
     expect(slope(1, 1e-7)).toBeCloseTo(6 / 7, 5);
@@ -122,12 +146,7 @@ describe("the search for the lowest clearance over the span", () => {
       { x: 76.8, y: -40 },
       { x: span, y: -40 },
     ];
-    const groundAt = (x: number) => {
-      const k = ground.findIndex((p) => p.x >= x);
-      if (k <= 0) return ground[0].y;
-      const [a, b] = [ground[k - 1], ground[k]];
-      return a.y + ((b.y - a.y) * (x - a.x)) / (b.x - a.x);
-    };
+    const groundAt = groundThrough(ground);
     const lowest = parabola(0);
     const r = lowestClearance(
       span,
@@ -143,22 +162,59 @@ describe("the search for the lowest clearance over the span", () => {
     for (let f = 0.01; f <= 0.99; f += 0.0005) expect(lowest(f * span) - groundAt(f * span)).toBeGreaterThanOrEqual(r.clearanceM - 1e-9);
   });
 
-  it("leaves out ground points closer to an anchor than 1 % of the span, where no fall is worked out", () => {
-    // A ledge 0.48 m from A reaching up to 2 m below it, level ground from 0.72 m on: the search is as over level ground.
+  it.each([
+    ["A", 0.48, 0.72],
+    ["B", span - 0.48, span - 0.72],
+  ])("leaves out ground points closer to anchor %s than 1 %% of the span, where no fall is worked out", (_, ledgeX, footX) => {
+    // A ledge 0.48 m from the anchor reaching up to 2 m below A, level ground from 0.72 m on: as over level ground.
     const ledge = [
-      { x: 0.48, y: -2 },
-      { x: 0.72, y: -40 },
-    ];
-    const groundAt = (x: number) => (x <= 0.48 ? -2 : x >= 0.72 ? -40 : -2 - (38 * (x - 0.48)) / 0.24);
+      { x: ledgeX, y: -2 },
+      { x: footX, y: -40 },
+    ].sort((a, b) => a.x - b.x);
     const withLedge = lowestClearance(
       span,
       2.5,
       hang,
-      groundAt,
+      groundThrough(ledge),
       ledge.map((p) => p.x),
       parabola(2.5),
     );
     expect(withLedge).toEqual(lowestClearance(span, 2.5, hang, level, [0, span], parabola(2.5)));
+  });
+
+  it.each([
+    ["falling", -60, 0.99],
+    ["rising", 60, 0.01],
+  ])("on a line %s 60 m from A, finds the lowest at the last position searched by the lower anchor, %s of the span", (_, rise, share) => {
+    // The parabola's vertex, (40 − rise)/80 of the span, lies beyond the lower anchor: the lowest searched is at 1 % from it.
+    const r = lowestClearance(span, rise, hang, level, [0, span], parabola(rise));
+    expect(r.positionM).toBe(share * span);
+    expect(r.clearanceM).toBe(parabola(rise)(share * span) + 40);
+  });
+
+  it("finds a ledge by anchor A lower than a rock at mid-span, though it is no scan position", () => {
+    // Level ground at −40 m but for a ledge reaching −3 m at 1.2 % of the span and a rock reaching −12.6 m at mid-span:
+    // clearances 0.53 m at the ledge and 0.6 m at the rock (from the parabola above, by hand).
+    const ground = [
+      { x: 0, y: -40 },
+      { x: 1, y: -40 },
+      { x: 1.44, y: -3 },
+      { x: 1.9, y: -40 },
+      { x: 59, y: -40 },
+      { x: 60, y: -12.6 },
+      { x: 61, y: -40 },
+    ];
+    const lowest = parabola(0);
+    const r = lowestClearance(
+      span,
+      0,
+      hang,
+      groundThrough(ground),
+      ground.map((p) => p.x),
+      lowest,
+    );
+    expect(lowest(1.44) + 3).toBeLessThan(lowest(60) + 12.6);
+    expect(r).toEqual({ clearanceM: lowest(1.44) + 3, positionM: 1.44 });
   });
 });
 
