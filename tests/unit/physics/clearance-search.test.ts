@@ -165,7 +165,7 @@ describe("the search for the lowest clearance over the span", () => {
   it.each([
     ["A", 0.48, 0.72],
     ["B", span - 0.48, span - 0.72],
-  ])("leaves out ground points closer to anchor %s than 1 %% of the span, where no fall is worked out", (_, ledgeX, footX) => {
+  ])("leaves out ground points closer to anchor %s than 1 per cent of the span, where no fall is worked out", (_, ledgeX, footX) => {
     // A ledge 0.48 m from the anchor reaching up to 2 m below A, level ground from 0.72 m on: as over level ground.
     const ledge = [
       { x: ledgeX, y: -2 },
@@ -185,7 +185,7 @@ describe("the search for the lowest clearance over the span", () => {
   it.each([
     ["falling", -60, 0.99],
     ["rising", 60, 0.01],
-  ])("on a line %s 60 m from A, finds the lowest at the last position searched by the lower anchor, %s of the span", (_, rise, share) => {
+  ])("on a line %s 60 m from A, finds the lowest at the last position searched, 1 per cent of the span from the lower anchor", (_, rise, share) => {
     // The parabola's vertex, (40 − rise)/80 of the span, lies beyond the lower anchor: the lowest searched is at 1 % from it.
     const r = lowestClearance(span, rise, hang, level, [0, span], parabola(rise));
     expect(r.positionM).toBe(share * span);
