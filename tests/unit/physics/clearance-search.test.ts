@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { evaluateRig, lowestClearance, monotoneCubic } from "../../../physics";
+import { evaluateRig, groundHeightAt, lowestClearance, monotoneCubic } from "../../../physics";
 import { goldenSectionMinimum } from "../../../physics/golden-section";
 
 /** Calls of f, in order, so a test can see where a search looked. */
@@ -15,15 +15,10 @@ function recorded(f: (x: number) => number): { f: (x: number) => number; calls: 
   };
 }
 
-/** Ground linear between its points and level beyond them, as the engine's ground (hand-written here). */
+/** The engine's ground through points given as (x, y) (groundHeightAt, checked by hand in ground-clearance.test.ts). */
 function groundThrough(points: { x: number; y: number }[]): (x: number) => number {
-  return (x) => {
-    const k = points.findIndex((p) => p.x >= x);
-    if (k === 0) return points[0].y;
-    if (k < 0) return points[points.length - 1].y;
-    const [a, b] = [points[k - 1], points[k]];
-    return a.y + ((b.y - a.y) * (x - a.x)) / (b.x - a.x);
-  };
+  const ground = points.map((p) => ({ xM: p.x, heightM: p.y }));
+  return (x) => groundHeightAt(ground, x);
 }
 
 /** Evaluations a golden-section search makes: two, then one a step until the interval is within the tolerance. */
