@@ -44,13 +44,34 @@ async function signIn(): Promise<string> {
     .join("; ");
 }
 
-async function loadRound(options: Partial<autocannon.Options>): Promise<Round> {
+/** What is loaded: the label printed is made from the same method and path that are requested. */
+interface Target {
+  method: "GET" | "POST";
+  path: string;
+  note?: string;
+  headers?: Record<string, string>;
+  body?: string;
+}
+
+const title = (target: Target) => `${target.method} ${target.path}${target.note ? `, ${target.note}` : ""}`;
+
+/** One request to the target first: each must answer the JSON of its route, so that no figure measures something else. */
+async function probe(target: Target): Promise<void> {
+  const response = await fetch(`${APP_URL}${target.path}`, { method: target.method, headers: { origin: APP_URL, ...target.headers }, body: target.body });
+  const type = response.headers.get("content-type") ?? "";
+  if (!response.ok || !type.startsWith("application/json"))
+    throw new Error(`${title(target)} answered ${response.status} ${type || "with no content type"}, not its route's JSON: nothing was measured.`);
+  await response.arrayBuffer();
+}
+
+async function loadRound(target: Target): Promise<Round> {
   const result = await autocannon({
-    url: APP_URL,
+    url: `${APP_URL}${target.path}`,
+    method: target.method,
     connections: CONNECTIONS,
     duration: SECONDS / ROUNDS,
-    ...options,
-    headers: { origin: APP_URL, ...options.headers },
+    headers: { origin: APP_URL, ...target.headers },
+    body: target.body,
   });
   return {
     requests: result.requests.total,
@@ -67,7 +88,7 @@ const median = (values: number[]) => {
   return Number.isInteger(middle) ? (sorted[middle - 1] + sorted[middle]) / 2 : sorted[Math.floor(middle)];
 };
 
-function figures(title: string, rounds: Round[]): Figures {
+function figures(target: Target, rounds: Round[]): Figures {
   const sum = (pick: (r: Round) => number) => rounds.reduce((total, r) => total + pick(r), 0);
   const result = {
     rate: sum((r) => r.requests) / sum((r) => r.seconds),
@@ -76,7 +97,9 @@ function figures(title: string, rounds: Round[]): Figures {
     other: sum((r) => r.other),
   };
   const perRound = rounds.map((r) => (r.requests / r.seconds).toFixed(0)).join(", ");
-  console.log(`${title}: ${result.rate.toFixed(0)} req/s (rounds: ${perRound}), p99 ${result.p99} ms, ${result.ok} answered 2xx, ${result.other} did not`);
+  console.log(
+    `${title(target)}: ${result.rate.toFixed(0)} req/s (rounds: ${perRound}), p99 ${result.p99} ms, ${result.ok} answered 2xx, ${result.other} did not`,
+  );
   return result;
 }
 
@@ -102,16 +125,22 @@ async function main() {
   console.log(
     `Load on ${APP_URL}: ${CONNECTIONS} connections, ${SECONDS} s each, in ${ROUNDS} rounds of the four in turn (autocannon on the same cores as the server)\n`,
   );
+  const targets: Record<"base" | "list" | "compute", Target> = {
+    base: { method: "GET", path: "/api/health" },
+    list: { method: "GET", path: "/api/kit/models", note: "signed in", headers: { cookie } },
+    compute: { method: "POST", path: "/api/compute", note: "example rig", headers: { cookie, "content-type": "application/json" }, body: rig },
+  };
+  for (const target of Object.values(targets)) await probe(target);
   const rounds = { base: [] as Round[], list: [] as Round[], compute: [] as Round[], engine: [] as { calls: number; seconds: number }[] };
   for (let round = 0; round < ROUNDS; round++) {
-    rounds.base.push(await loadRound({ method: "GET" }));
-    rounds.list.push(await loadRound({ method: "GET", url: `${APP_URL}/api/kit/models`, headers: { cookie } }));
-    rounds.compute.push(await loadRound({ method: "POST", url: `${APP_URL}/api/compute`, headers: { cookie, "content-type": "application/json" }, body: rig }));
+    rounds.base.push(await loadRound(targets.base));
+    rounds.list.push(await loadRound(targets.list));
+    rounds.compute.push(await loadRound(targets.compute));
     rounds.engine.push(engineRate(SECONDS / ROUNDS));
   }
-  const base = figures("GET /api/health", rounds.base);
-  const list = figures("GET /api/kit/models, signed in", rounds.list);
-  const compute = figures("POST /api/compute, example rig", rounds.compute);
+  const base = figures(targets.base, rounds.base);
+  const list = figures(targets.list, rounds.list);
+  const compute = figures(targets.compute, rounds.compute);
   const engine = rounds.engine.reduce((total, r) => total + r.calls, 0) / rounds.engine.reduce((total, r) => total + r.seconds, 0);
   console.log(
     `evaluateRig in this process, one core: ${engine.toFixed(0)} /s (rounds: ${rounds.engine.map((r) => (r.calls / r.seconds).toFixed(0)).join(", ")})\n`,
