@@ -71,8 +71,6 @@ export function databaseUnavailable(): NextResponse {
   );
 }
 
-export { readJson };
-
 type Segment<P> = { params: Promise<P> };
 
 /** Any route handler: origin check on mutating requests, and every error mapped to a clear answer. */

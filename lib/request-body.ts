@@ -74,13 +74,22 @@ export const NUL_REFUSAL = "Nothing was saved: the text contains a NUL character
 const SURROGATE_REFUSAL =
   "Nothing was saved: the text contains half of a character (an unpaired UTF-16 surrogate), which no form can type. Remove it and send again.";
 
-/** A JSON body of at most JSON_BODY_LIMIT bytes and JSON_DEPTH_LIMIT levels, parsed; else a 400 or 413 saying what is allowed. */
-export async function readJson(request: Request): Promise<unknown> {
-  const bytes = await readBodyBytes(
+/** A JSON body's bytes, at most JSON_BODY_LIMIT of them, unparsed (for parsing on a worker thread); else a 413 saying what is allowed. */
+export function readJsonBytes(request: Request): Promise<Uint8Array<ArrayBuffer>> {
+  return readBodyBytes(
     request,
     JSON_BODY_LIMIT,
     (size) => new RequestError(413, `The request body is ${mebibytes(size)}; a form's JSON may be at most ${JSON_BODY_LIMIT / MiB} MiB.`),
   );
+}
+
+/** A JSON body of at most JSON_BODY_LIMIT bytes and JSON_DEPTH_LIMIT levels, parsed; else a 400 or 413 saying what is allowed. */
+export async function readJson(request: Request): Promise<unknown> {
+  return parseJsonBytes(await readJsonBytes(request));
+}
+
+/** JSON text of at most JSON_DEPTH_LIMIT levels, with no NUL and no half character, parsed; else a 400 saying what is wrong. */
+export function parseJsonBytes(bytes: Uint8Array): unknown {
   const text = new TextDecoder().decode(bytes);
   if (!jsonDepthWithin(text, JSON_DEPTH_LIMIT)) {
     throw new RequestError(400, `The request body nests lists or objects more than ${JSON_DEPTH_LIMIT} levels deep; no form sends that.`);
