@@ -59,4 +59,19 @@ describe("bounded request bodies", () => {
     const huge = await member.post("/api/compute", { ...example, mainline: { ...example.mainline, stretchPoints: stretchPoints(200_000) } });
     expect(huge.status).toBe(413);
   });
+
+  it("refuses bad JSON text to the engine (now checked on its worker thread) with the refusals every route gives", async () => {
+    const crew = await createCrew("limits-compute-text");
+    const member = await AppClient.signedIn(crew.people.member.email, FIXTURE_PASSWORD);
+    const cases: [string, RegExp][] = [
+      ['{"name": ', /^The request body is not valid JSON\.$/],
+      [JSON.stringify({ ...example, name: "Quarry\u0000" }), /NUL character \(code 0\)/],
+      ['{"name": "Quarry \\ud800"}', /half of a character/],
+    ];
+    for (const [body, message] of cases) {
+      const refused = await member.post("/api/compute", body, json);
+      expect(refused.status).toBe(400);
+      expect((await refused.json()).error).toMatch(message);
+    }
+  });
 });
