@@ -12,6 +12,8 @@ const APP_URL = process.env.BENCH_APP_URL ?? "http://127.0.0.1:3000";
 const CONNECTIONS = 20;
 const SECONDS = Number(process.env.BENCH_LOAD_SECONDS ?? 20);
 const ROUNDS = 4;
+/** Unmeasured load on each target first: a freshly started server compiles its hot paths in its first seconds. */
+const WARM_UP_SECONDS = 3;
 const rig = readFileSync(new URL("../../physics/examples/quarry-highline.json", import.meta.url), "utf8");
 
 /** One target's load over all rounds: requests a second over its whole time, the median of the rounds' p99s. */
@@ -64,12 +66,12 @@ async function probe(target: Target): Promise<void> {
   await response.arrayBuffer();
 }
 
-async function loadRound(target: Target): Promise<Round> {
+async function loadRound(target: Target, seconds = SECONDS / ROUNDS): Promise<Round> {
   const result = await autocannon({
     url: `${APP_URL}${target.path}`,
     method: target.method,
     connections: CONNECTIONS,
-    duration: SECONDS / ROUNDS,
+    duration: seconds,
     headers: { origin: APP_URL, ...target.headers },
     body: target.body,
   });
@@ -123,14 +125,17 @@ async function main() {
     throw new Error(`nothing answers ${APP_URL}/api/health: start the production build with \`npm start\` (or set BENCH_APP_URL), then run this again.`);
   const cookie = await signIn();
   console.log(
-    `Load on ${APP_URL}: ${CONNECTIONS} connections, ${SECONDS} s each, in ${ROUNDS} rounds of the four in turn (autocannon on the same cores as the server)\n`,
+    `Load on ${APP_URL}: ${CONNECTIONS} connections, ${SECONDS} s each, in ${ROUNDS} rounds of the four in turn after ${WARM_UP_SECONDS} s of unmeasured load on each (autocannon on the same cores as the server)\n`,
   );
   const targets: Record<"base" | "list" | "compute", Target> = {
     base: { method: "GET", path: "/api/health" },
     list: { method: "GET", path: "/api/kit/models", note: "signed in", headers: { cookie } },
     compute: { method: "POST", path: "/api/compute", note: "example rig", headers: { cookie, "content-type": "application/json" }, body: rig },
   };
-  for (const target of Object.values(targets)) await probe(target);
+  for (const target of Object.values(targets)) {
+    await probe(target);
+    await loadRound(target, WARM_UP_SECONDS);
+  }
   const rounds = { base: [] as Round[], list: [] as Round[], compute: [] as Round[], engine: [] as { calls: number; seconds: number }[] };
   for (let round = 0; round < ROUNDS; round++) {
     rounds.base.push(await loadRound(targets.base));
