@@ -1,4 +1,4 @@
-import { goldenSectionMinimum } from "./golden-section";
+import { brentMinimum } from "./brent-minimum";
 
 /**
  * The trade's rule of thumb for how high to rig a highline: at least a third of its length plus 3 m above
@@ -60,7 +60,7 @@ export function monotoneCubic(xs: readonly number[], ys: readonly number[]): (x:
  * positions: at the scan above, in order along the span; then its monotone interpolation through those and
  * the anchors (where the walker hangs `hangAtAnchors` below each anchor) is searched against the ground at
  * every half per cent of the span and at every ground point for the most likely position. That position is
- * worked out exactly, and so is a golden-section search between the scan positions either side of it: the
+ * worked out exactly, and so is a search by Brent's method between the scan positions either side of it: the
  * interpolation places a low point only at a scan position or a ground point (it never overshoots), while on
  * a line with a height difference the real one lies between them. The answer is the lowest exact clearance
  * found: a figure of a real fall position, never an interpolated one.
@@ -95,7 +95,9 @@ export function lowestClearance(
   // Between the scan positions either side of the one nearest the best: the real low point lies there.
   const nearest = knots.reduce((k, x, i) => (Math.abs(x - best) < Math.abs(knots[k] - best) ? i : k), 1);
   const k = Math.min(Math.max(nearest, 1), knots.length - 2);
-  goldenSectionMinimum(clearanceAt, Math.max(knots[k - 1], FIRST * span), Math.min(knots[k + 1], LAST * span), EXACT_TOLERANCE * span);
+  const lo = Math.max(knots[k - 1], FIRST * span);
+  const hi = Math.min(knots[k + 1], LAST * span);
+  brentMinimum(clearanceAt, lo, hi, EXACT_TOLERANCE * span, best > lo && best < hi ? best : undefined);
   let result: LowestClearance = { clearanceM: Infinity, positionM: NaN };
   for (const [x, c] of exact) if (c < result.clearanceM) result = { clearanceM: c, positionM: x };
   return result;
