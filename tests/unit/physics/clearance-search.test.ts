@@ -1,4 +1,5 @@
 import { readFileSync } from "node:fs";
+import scipyBrent from "./reference/brent-sequences.json";
 import { describe, expect, it } from "vitest";
 import { evaluateRig, groundHeightAt, lowestClearance, monotoneCubic } from "../../../physics";
 import { brentMinimum } from "../../../physics/brent-minimum";
@@ -60,6 +61,35 @@ describe("Brent's minimization (Brent 1973, ch. 5, localmin)", () => {
     expect(Math.abs(brentMinimum((x) => Math.abs(x - 0.7), 0, 1, 1e-6) - 0.7)).toBeLessThanOrEqual(within(0.7));
     expect(Math.abs(brentMinimum((x) => x, 2, 5, 1e-6) - 2)).toBeLessThanOrEqual(within(2));
     expect(Math.abs(brentMinimum((x) => -x, 2, 5, 1e-6) - 5)).toBeLessThanOrEqual(within(5));
+  });
+});
+
+describe("Brent's minimization against SciPy's (reference/brent-sequences.json, written by brent-sequences.py)", () => {
+  // The functions of the reference file, as it writes them (+ − × ÷ and abs only, so both languages agree to the bit).
+  const functions: Record<string, (x: number) => number> = {
+    parabola: (x) => (x - 0.3) * (x - 0.3),
+    kink: (x) => Math.abs(x - 0.7),
+    rising: (x) => x,
+    falling: (x) => -x,
+    quartic: (x) => (x - 2) * (x - 2) * (x - 2) * (x - 2) + 0.5 * x,
+    "two minima": (x) => x * x * (x - 3) * (x - 3) + x,
+    reciprocal: (x) => 1 / x + x,
+    "flat bottom": (x) => (x - 1) * (x - 1) * (x - 1) * (x - 1) * (x - 1) * (x - 1),
+    "clearance-like": (x) => 0.002 * (x - 41.3) * (x - 41.3) - 0.00001 * (x - 41.3) * (x - 41.3) * (x - 41.3) + 12,
+  };
+
+  it("has a function for every case of the reference file", () => {
+    expect(Object.keys(functions).sort()).toEqual(scipyBrent.cases.map((c) => c.name).sort());
+  });
+
+  // SciPy's bounded method is Brent's localmin as in Forsythe, Malcolm & Moler (1977); its √ε is √2.2e-16 where the
+  // engine takes √Number.EPSILON, so positions agree to about 1e-10 of their size, not to the bit.
+  it.each(scipyBrent.cases.map((c) => [c.name, c] as const))("evaluates the points SciPy evaluates, in its order, and ends where it ends: %s", (_, c) => {
+    const { f, calls } = recorded(functions[c.name]);
+    const x = brentMinimum(f, c.lo, c.hi, c.tolerance);
+    expect(calls).toHaveLength(c.calls.length);
+    calls.forEach((position, i) => expect(Math.abs(position - c.calls[i])).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(position))));
+    expect(Math.abs(x - c.x)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(x)));
   });
 });
 
