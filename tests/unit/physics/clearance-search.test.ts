@@ -167,6 +167,29 @@ describe("the search for the lowest clearance over the span", () => {
     expect(calls.length).toBeLessThan(7 + 1 + goldenEvaluations(0.5, 0.001));
   });
 
+  it.each([2.5, 12, -27])(
+    "on a line rising %s m, searches by Brent's method from the guide's best between the scan positions either side of it, to 0.1 % of the span",
+    (rise) => {
+      const { f, calls } = recorded(parabola(rise));
+      lowestClearance(span, rise, hang, level, [0, span], f);
+      // The guide: the monotone cubic through the anchors and the scan, its lowest every 0.5 % from 1 % to 99 %.
+      const knots = [0, 0.02, 0.1, 0.25, 0.5, 0.75, 0.9, 0.98, 1].map((share) => share * span);
+      const guide = monotoneCubic(knots, [-hang, ...knots.slice(1, -1).map(parabola(rise)), rise - hang]);
+      const candidates = Array.from({ length: 197 }, (_, i) => (0.01 + 0.005 * i) * span);
+      const best = candidates.reduce((lowest, x) => (guide(x) < guide(lowest) ? x : lowest));
+      // The search runs between the scan positions either side of the one nearest the best.
+      const k = knots.reduce((nearest, x, i) => (Math.abs(x - best) < Math.abs(knots[nearest] - best) ? i : nearest), 1);
+      const lo = Math.max(knots[k - 1], 0.01 * span);
+      const hi = Math.min(knots[k + 1], 0.99 * span);
+      const search = recorded((x) => parabola(rise)(x) - level());
+      brentMinimum(search.f, lo, hi, 0.001 * span, best);
+      // The scan first, then the best unless it is a scan position, then the search: no position worked out twice.
+      const before = calls.indexOf(best) === 7 ? 8 : 7;
+      expect(calls.slice(0, before)).toContain(best);
+      expect(calls.slice(before)).toEqual(search.calls.filter((x) => !calls.slice(0, before).includes(x)));
+    },
+  );
+
   it("finds a narrow rock under the line at its top, a ground point between the scan positions", () => {
     // Level ground at −40 m but for a rock rising to −12 m at 76 m (63.3 % of the span).
     const ground = [
