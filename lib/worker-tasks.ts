@@ -1,8 +1,8 @@
 import { parentPort } from "node:worker_threads";
 import { evaluateRig, type DisplayUnits, type ForceUnit } from "@/physics";
+import { parseJsonBytes } from "./request-body";
 import { sha256Hex } from "./sha256";
 import { analyseTrace } from "./trace-analysis";
-import { parseJsonBytes } from "./request-body";
 import { parseTraceCsv } from "./trace-csv";
 import { traceText } from "./uploads";
 

@@ -4,13 +4,13 @@ const GOLDEN_STEP = (3 - Math.sqrt(5)) / 2;
 const RELATIVE_RESOLUTION = Math.sqrt(Number.EPSILON);
 
 /**
- * A minimum of f on [lo, hi], to within `tolerance` of its position (and √ε·|x|, the floating resolution): Brent's method (R. P. Brent, "Algorithms for
- * Minimization without Derivatives", 1973, ch. 5, procedure localmin). A parabola through the three best points so
- * far gives the next one where it falls well inside the interval and the step shrinks fast enough; else a
- * golden-section step. On a smooth minimum it closes in much faster than golden-section search alone (each catch
- * the clearance search evaluates is a whole solve), and it is never much slower. It starts at `start` (a point
- * inside the interval whose value is known to be low) or at the first golden section. Returns the position of the
- * lowest value it evaluated.
+ * A minimum of f on [lo, hi], to within `tolerance` of its position (and √ε·|x|, the floating resolution):
+ * Brent's method (R. P. Brent, "Algorithms for Minimization without Derivatives", 1973, ch. 5, procedure
+ * localmin). A parabola through the three best points so far gives the next one where it falls well inside the
+ * interval and the step shrinks fast enough; else a golden-section step, so it closes in on any minimum that
+ * golden-section search would, and on a smooth one in far fewer evaluations (each catch the clearance search
+ * evaluates is a whole solve). It starts at `start` (a point inside the interval whose value is known to be low)
+ * or at the first golden section. Returns the position of the lowest value it evaluated.
  */
 export function brentMinimum(f: (x: number) => number, lo: number, hi: number, tolerance: number, start = lo + GOLDEN_STEP * (hi - lo)): number {
   let a = lo;
