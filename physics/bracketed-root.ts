@@ -11,12 +11,13 @@ export function bracketedRoot(f: (x: number) => number, lo: number, hi: number, 
   let fb = f(b);
   if (fa === 0) return a;
   if (fb === 0) return b;
-  if (!(fa * fb < 0)) throw new SolveError(what, 0, Math.min(Math.abs(fa), Math.abs(fb)), `found no sign change on [${lo}, ${hi}]`);
+  // Signs are compared, not the product's: the product of two values below about 1e-154 underflows to zero.
+  if (!(Math.sign(fa) === -Math.sign(fb))) throw new SolveError(what, 0, Math.min(Math.abs(fa), Math.abs(fb)), `found no sign change on [${lo}, ${hi}]`);
   for (let i = 0; i < 200; i++) {
     const c = b - (fb * (b - a)) / (fb - fa);
     const fc = f(c);
     if (fc === 0) return c;
-    if (fc * fb < 0) {
+    if (Math.sign(fc) !== Math.sign(fb)) {
       a = b;
       fa = fb;
     } else {

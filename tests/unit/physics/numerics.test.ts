@@ -184,4 +184,16 @@ describe("the solvers, step by step", () => {
       expect.objectContaining({ message: "none found no sign change on [-1, 2] (scaled residual 2.00e+0)" }),
     );
   });
+
+  it("bracketed roots of a function scaled by 1e-160 and 1e-200: the root of c·g is g's (analytic: ln 1.5 and 0.3), though products of its values underflow", () => {
+    // Below about 1e-154 a product of two values is zero or subnormal: a sign test by product once lost the bracket
+    // (1e-160 gave 0.41075 for ln 1.5) or saw no sign change (1e-200).
+    for (const scale of [1, 1e-160, 1e-200]) {
+      expect(bracketedRoot((x) => scale * (Math.exp(x) - 1.5), 0, 1, "scaled")).toBeCloseTo(Math.log(1.5), 12);
+      expect(bracketedRoot((x) => scale * (x - 0.3), 0, 1, "scaled")).toBeCloseTo(0.3, 12);
+    }
+    expect(() => bracketedRoot((x) => 1e-200 * (x * x + 1), -1, 2, "none")).toThrow(
+      expect.objectContaining({ message: expect.stringContaining("found no sign change") }),
+    );
+  });
 });
