@@ -7,7 +7,7 @@
 // busy CPU time a request is measured too: it bounds what any route can reach on these cores.
 import { execFileSync } from "node:child_process";
 import { existsSync, readFileSync } from "node:fs";
-import { availableParallelism } from "node:os";
+import { cpus } from "node:os";
 import autocannon from "autocannon";
 import { evaluateRig } from "../../physics";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "../../seeds/01_demo_crew";
@@ -197,8 +197,9 @@ async function main() {
   ];
   if (session.cpuMs !== null) {
     // A compute request costs at least what a signed-in request costs the machine, plus one evaluation of the rig:
-    // however the server were built, these cores cannot answer more of them a second than this.
-    const cores = availableParallelism();
+    // however the server were built, these cores cannot answer more of them a second than this. All the machine's
+    // cores, as /proc/stat counts them, whatever this process's own affinity.
+    const cores = cpus().length;
     const ceiling = (cores * 1000) / (session.cpuMs + 1000 / engine);
     rows.push([
       `Compute's ceiling on these ${cores} cores: their time over (a signed-in request's machine CPU, ${session.cpuMs.toFixed(2)} ms, plus one evaluation, ${(1000 / engine).toFixed(2)} ms), against the engine's rate`,
