@@ -140,6 +140,32 @@ describe("the lowest clearance over the span", () => {
   });
 });
 
+describe("two rocks under the demo line, 48 m and 72 m from A", () => {
+  // Level ground 40 m below A, rocks 1 m wide reaching −14 m and −13.7 m: the guide through the scan ranks the rock at
+  // 72 m lower, where a fall's exact catch leaves about 19 cm more clearance than over the rock at 48 m.
+  const rocks = [
+    { xM: 47.5, heightM: -40 },
+    { xM: 48, heightM: -14 },
+    { xM: 48.5, heightM: -40 },
+    { xM: 71.5, heightM: -40 },
+    { xM: 72, heightM: -13.7 },
+    { xM: 72.5, heightM: -40 },
+  ];
+  const rig = { ...withGround, ground: { points: rocks } };
+
+  it("gives the lower rock's clearance: that of an exact catch over its top, no higher (independent: a fall worked out at each top)", () => {
+    const r = evaluateRig(rig);
+    const overTop = (xM: number) => evaluateRig({ ...rig, leashFall: { ...rig.leashFall, positionFraction: xM / rig.spanM } });
+    const [at48, at72] = [overTop(48), overTop(72)];
+    expect(at48.leashFall.groundClearanceM!).toBeLessThan(at72.leashFall.groundClearanceM! - 0.1);
+    for (const kind of ["leashFall", "backupCatch"] as const) {
+      const tops = [at48, at72].map((there) => (kind === "leashFall" ? there.leashFall : there.backupCatch!).groundClearanceM!);
+      expect(r.clearance[kind]!.clearanceM).toBeLessThanOrEqual(Math.min(...tops) + 1e-9);
+      expect(r.clearance[kind]!.clearanceM).toBeGreaterThan(Math.min(...tops) - 0.001);
+    }
+  });
+});
+
 describe("the rule of thumb", () => {
   it("a third of the length plus 3 m (Swiss Slackline Association, “Highlining – the 10 most important points”, 2014): 60 m → 23 m, 120 m → 43 m", () => {
     expect(RULE_OF_THUMB.heightAboveGroundM(60)).toBe(23);
