@@ -124,7 +124,7 @@ export function lowestClearance(
     .sort((a, b) => a.value - b.value);
   for (const { x, value } of lowPlaces) {
     if (value - GUIDE_ALLOWANCE * span >= result.clearanceM) break;
-    if (exact.has(x)) continue;
+    // A place already worked out is no lower than the lowest so far, so it is not searched again.
     const lowestSoFar = result.clearanceM;
     if (clearanceAt(x) < lowestSoFar) searchAround(x);
   }

@@ -304,6 +304,48 @@ describe("the search for the lowest clearance over the span", () => {
     // A scan of exact clearances every 0.05 % of the span finds nothing lower (independent search in the test).
     for (let f = 0.01; f <= 0.99; f += 0.0005) expect(lowest(f * span) - groundAt(f * span)).toBeGreaterThanOrEqual(r.clearanceM - 1e-9);
   });
+
+  it("then works out the guide's other low places within the allowance, lowest first, searching around only a lower one", () => {
+    // The two rocks above and two more: at 100 m, 1.5 m below the lowest point there (within 1 % of the span, 1.2 m,
+    // of the rock at 48 m: worked out, not lower), and at 18 m, 5 m below it (beyond: never worked out).
+    const lowest = parabola(12);
+    const ground = [
+      { x: 0, y: -40 },
+      { x: 17.5, y: -40 },
+      { x: 18, y: lowest(18) - 5 },
+      { x: 18.5, y: -40 },
+      { x: 47.5, y: -40 },
+      { x: 48, y: -7.4 },
+      { x: 48.5, y: -40 },
+      { x: 71.5, y: -40 },
+      { x: 72, y: -5.4 },
+      { x: 72.5, y: -40 },
+      { x: 99.5, y: -40 },
+      { x: 100, y: lowest(100) - 1.5 },
+      { x: 100.5, y: -40 },
+      { x: span, y: -40 },
+    ];
+    const groundAt = groundThrough(ground);
+    const { f, calls } = recorded(lowest);
+    const r = lowestClearance(
+      span,
+      12,
+      hang,
+      groundAt,
+      ground.map((p) => p.x),
+      f,
+    );
+    expect(r.positionM).toBe(48);
+    // First the scan and the search around the guide's best, the rock at 72 m; then the rock at 48 m and Brent's
+    // method from it between the scan positions either side of the one nearest it (60 m), 30 and 90 m; then the rock
+    // at 100 m alone; the one at 18 m never.
+    const second = calls.indexOf(48);
+    expect(calls.slice(0, second)).toContain(72);
+    const around48 = recorded((x) => lowest(x) - groundAt(x));
+    brentMinimum(around48.f, 30, 90, 0.001 * span, 48);
+    expect(calls.slice(second)).toEqual([...around48.calls.filter((x) => !calls.slice(0, second).includes(x)), 100]);
+    expect(calls).not.toContain(18);
+  });
 });
 
 describe("the guide's allowance", () => {
