@@ -149,6 +149,27 @@ describe("the search for the lowest clearance over the span", () => {
     const f = x / span;
     return rise * f - 40 * f * (1 - f) - hang;
   };
+  /** The search over ground through the given points, the walker's lowest point after a fall at x given. */
+  const overGround = (points: { x: number; y: number }[], rise: number, lowestPointAt: (x: number) => number) =>
+    lowestClearance(
+      span,
+      rise,
+      hang,
+      groundThrough(points),
+      points.map((p) => p.x),
+      lowestPointAt,
+    );
+  /** A rock 1 m wide at x, its top at `top`, on level ground 40 m below A. */
+  const rock = (x: number, top: number) => [
+    { x: x - 0.5, y: -40 },
+    { x, y: top },
+    { x: x + 0.5, y: -40 },
+  ];
+  /** A scan of exact clearances every 0.05 % of the span finds none below the one found (independent search in the test). */
+  const expectNoneLowerInFineScan = (points: { x: number; y: number }[], lowestPointAt: (x: number) => number, found: number) => {
+    const groundAt = groundThrough(points);
+    for (let f = 0.01; f <= 0.99; f += 0.0005) expect(lowestPointAt(f * span) - groundAt(f * span)).toBeGreaterThanOrEqual(found - 1e-9);
+  };
 
   it.each([2.5, 12, -27, 35])("on a line rising %s m over level ground, finds the vertex of the lowest point, not a scan position", (rise) => {
     const r = lowestClearance(span, rise, hang, level, [0, span], parabola(rise));
@@ -200,20 +221,11 @@ describe("the search for the lowest clearance over the span", () => {
       { x: 76.8, y: -40 },
       { x: span, y: -40 },
     ];
-    const groundAt = groundThrough(ground);
     const lowest = parabola(0);
-    const r = lowestClearance(
-      span,
-      0,
-      hang,
-      groundAt,
-      ground.map((p) => p.x),
-      lowest,
-    );
+    const r = overGround(ground, 0, lowest);
     expect(r.positionM).toBe(76);
     expect(r.clearanceM).toBeCloseTo(lowest(76) + 12, 12);
-    // A scan of exact clearances every 0.05 % of the span finds nothing lower (independent search in the test).
-    for (let f = 0.01; f <= 0.99; f += 0.0005) expect(lowest(f * span) - groundAt(f * span)).toBeGreaterThanOrEqual(r.clearanceM - 1e-9);
+    expectNoneLowerInFineScan(ground, lowest, r.clearanceM);
   });
 
   it.each([
@@ -225,15 +237,7 @@ describe("the search for the lowest clearance over the span", () => {
       { x: ledgeX, y: -2 },
       { x: footX, y: -40 },
     ].sort((a, b) => a.x - b.x);
-    const withLedge = lowestClearance(
-      span,
-      2.5,
-      hang,
-      groundThrough(ledge),
-      ledge.map((p) => p.x),
-      parabola(2.5),
-    );
-    expect(withLedge).toEqual(lowestClearance(span, 2.5, hang, level, [0, span], parabola(2.5)));
+    expect(overGround(ledge, 2.5, parabola(2.5))).toEqual(lowestClearance(span, 2.5, hang, level, [0, span], parabola(2.5)));
   });
 
   it.each([
@@ -259,14 +263,7 @@ describe("the search for the lowest clearance over the span", () => {
       { x: 61, y: -40 },
     ];
     const lowest = parabola(0);
-    const r = lowestClearance(
-      span,
-      0,
-      hang,
-      groundThrough(ground),
-      ground.map((p) => p.x),
-      lowest,
-    );
+    const r = overGround(ground, 0, lowest);
     expect(lowest(1.44) + 3).toBeLessThan(lowest(60) + 12.6);
     expect(r).toEqual({ clearanceM: lowest(1.44) + 3, positionM: 1.44 });
   });
@@ -274,16 +271,7 @@ describe("the search for the lowest clearance over the span", () => {
   it("finds the lower of two rocks when the guide ranks them the other way round", () => {
     // On a line rising 12 m, rocks at 48 m (f = 0.4) and 72 m (f = 0.6) reaching 0.6 and 1.0 m below the walker's
     // lowest point there, −6.8 and −4.4 m by hand from the parabola: tops at −7.4 and −5.4 m over level ground at −40 m.
-    const ground = [
-      { x: 0, y: -40 },
-      { x: 47.5, y: -40 },
-      { x: 48, y: -7.4 },
-      { x: 48.5, y: -40 },
-      { x: 71.5, y: -40 },
-      { x: 72, y: -5.4 },
-      { x: 72.5, y: -40 },
-      { x: span, y: -40 },
-    ];
+    const ground = [{ x: 0, y: -40 }, ...rock(48, -7.4), ...rock(72, -5.4), { x: span, y: -40 }];
     const groundAt = groundThrough(ground);
     const lowest = parabola(12);
     // The guide through the scan overstates the lowest point beside the scan position where it turns (by 0.49 m at
@@ -291,51 +279,20 @@ describe("the search for the lowest clearance over the span", () => {
     const knots = [0, 0.02, 0.1, 0.25, 0.5, 0.75, 0.9, 0.98, 1].map((share) => share * span);
     const guide = monotoneCubic(knots, [-hang, ...knots.slice(1, -1).map(lowest), 12 - hang]);
     expect(guide(72) - groundAt(72)).toBeLessThan(guide(48) - groundAt(48));
-    const r = lowestClearance(
-      span,
-      12,
-      hang,
-      groundAt,
-      ground.map((p) => p.x),
-      lowest,
-    );
+    const r = overGround(ground, 12, lowest);
     expect(r.positionM).toBe(48);
     expect(r.clearanceM).toBeCloseTo(0.6, 12);
-    // A scan of exact clearances every 0.05 % of the span finds nothing lower (independent search in the test).
-    for (let f = 0.01; f <= 0.99; f += 0.0005) expect(lowest(f * span) - groundAt(f * span)).toBeGreaterThanOrEqual(r.clearanceM - 1e-9);
+    expectNoneLowerInFineScan(ground, lowest, r.clearanceM);
   });
 
   it("then works out the guide's other low places within the allowance, lowest first, searching around only a lower one", () => {
     // The two rocks above and two more: at 100 m, 1.5 m below the lowest point there (within 1 % of the span, 1.2 m,
     // of the rock at 48 m: worked out, not lower), and at 18 m, 5 m below it (beyond: never worked out).
     const lowest = parabola(12);
-    const ground = [
-      { x: 0, y: -40 },
-      { x: 17.5, y: -40 },
-      { x: 18, y: lowest(18) - 5 },
-      { x: 18.5, y: -40 },
-      { x: 47.5, y: -40 },
-      { x: 48, y: -7.4 },
-      { x: 48.5, y: -40 },
-      { x: 71.5, y: -40 },
-      { x: 72, y: -5.4 },
-      { x: 72.5, y: -40 },
-      { x: 99.5, y: -40 },
-      { x: 100, y: lowest(100) - 1.5 },
-      { x: 100.5, y: -40 },
-      { x: span, y: -40 },
-    ];
+    const ground = [{ x: 0, y: -40 }, ...rock(18, lowest(18) - 5), ...rock(48, -7.4), ...rock(72, -5.4), ...rock(100, lowest(100) - 1.5), { x: span, y: -40 }];
     const groundAt = groundThrough(ground);
     const { f, calls } = recorded(lowest);
-    const r = lowestClearance(
-      span,
-      12,
-      hang,
-      groundAt,
-      ground.map((p) => p.x),
-      f,
-    );
-    expect(r.positionM).toBe(48);
+    expect(overGround(ground, 12, f).positionM).toBe(48);
     // First the scan and the search around the guide's best, the rock at 72 m; then the rock at 48 m and Brent's
     // method from it between the scan positions either side of the one nearest it (60 m), 30 and 90 m; then the rock
     // at 100 m alone; the one at 18 m never.
