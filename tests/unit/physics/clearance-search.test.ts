@@ -286,7 +286,7 @@ describe("the search for the lowest clearance over the span", () => {
   });
 
   it("then works out the guide's other low places within the allowance, lowest first, searching around only a lower one", () => {
-    // The two rocks above and two more: at 100 m, 1.5 m below the lowest point there (within 1 % of the span, 1.2 m,
+    // The two rocks above and two more: at 100 m, 1.5 m below the lowest point there (within 2 % of the span, 2.4 m,
     // of the rock at 48 m: worked out, not lower), and at 18 m, 5 m below it (beyond: never worked out).
     const lowest = parabola(12);
     const ground = [{ x: 0, y: -40 }, ...rock(18, lowest(18) - 5), ...rock(48, -7.4), ...rock(72, -5.4), ...rock(100, lowest(100) - 1.5), { x: span, y: -40 }];
@@ -310,6 +310,7 @@ describe("the guide's allowance", () => {
 
   // About 400 whole evaluations without ground: a generous timeout for a loaded machine (no speed is asserted here).
   it.each([
+    ["20 m at 1 kN", { spanM: 20, pretension: { ...example.pretension, forceN: 1000 } }],
     ["40 m", { spanM: 40 }],
     ["120 m", {}],
     ["120 m, B 20 m above A", { heightDifferenceM: 20 }],
@@ -329,7 +330,7 @@ describe("the guide's allowance", () => {
       );
       let worst = 0;
       for (let i = 1; i <= 99; i++) worst = Math.max(worst, Math.abs(guide((i / 100) * span) - lowestAt(i / 100)));
-      // Measured: 0.16 m on 40 m, 0.23 m on 120 m, 0.75 m on 300 m, 0.19 to 0.4 % of the span.
+      // Measured: 0.13 m on 20 m at 1 kN, 0.16 m on 40 m, 0.23 m on 120 m, 0.75 m on 300 m: 0.19 to 0.67 % of the span.
       expect(worst).toBeLessThan(0.5 * GUIDE_ALLOWANCE * span);
     },
     120_000,
