@@ -119,6 +119,8 @@ export function lowestClearance(
   // searched around where it is lower still.
   const alongSpan = [...new Set(candidates)].sort((a, b) => a - b);
   const values = alongSpan.map(guided);
+  // A low place is no higher than its neighbours along the span (a first or last position has one: the comparison
+  // with the missing one is false).
   const lowPlaces = alongSpan
     .map((x, i) => ({ x, value: values[i] }))
     .filter(({ value }, i) => !(value > values[i - 1]) && !(value > values[i + 1]))
