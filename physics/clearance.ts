@@ -97,7 +97,6 @@ export function lowestClearance(
   const scanLowest = scanXs.map((x) => clearanceAt(x) + groundAt(x));
   const knots = [0, ...scanXs, span];
   const estimate = monotoneCubic(knots, [-hangAtAnchors, ...scanLowest, rise - hangAtAnchors]);
-  const guided = (x: number) => estimate(x) - groundAt(x);
   const candidates = [...groundXs.filter((x) => x > FIRST * span && x < LAST * span)];
   const steps = Math.round((LAST - FIRST) / SEARCH_STEP);
   for (let i = 0; i <= steps; i++) candidates.push((FIRST + i * SEARCH_STEP) * span);
@@ -111,21 +110,19 @@ export function lowestClearance(
     const hi = Math.min(knots[k + 1], LAST * span);
     brentMinimum(clearanceAt, lo, hi, EXACT_TOLERANCE * span, start > lo && start < hi ? start : undefined);
   };
-  let best = candidates[0];
-  for (const x of candidates) if (guided(x) < guided(best)) best = x;
-  searchAround(best);
-  // The guide can rank two low places wrongly (two rocks, or a rock and a ledge): every other low place of it, lowest
-  // first, that it puts within GUIDE_ALLOWANCE of the lowest exact clearance so far is worked out exactly too, and
-  // searched around where it is lower still.
   const alongSpan = [...new Set(candidates)].sort((a, b) => a - b);
-  const values = alongSpan.map(guided);
-  // A low place is no higher than its neighbours along the span (a first or last position has one: the comparison
-  // with the missing one is false).
-  const lowPlaces = alongSpan
+  const values = alongSpan.map((x) => estimate(x) - groundAt(x));
+  // The guide's low places, lowest first: each no higher than its neighbours along the span (a first or last
+  // position has one: the comparison with the missing one is false). The lowest is the guide's best.
+  const [best, ...others] = alongSpan
     .map((x, i) => ({ x, value: values[i] }))
     .filter(({ value }, i) => !(value > values[i - 1]) && !(value > values[i + 1]))
     .sort((a, b) => a.value - b.value);
-  for (const { x, value } of lowPlaces) {
+  searchAround(best.x);
+  // The guide can rank two low places wrongly (two rocks, or a rock and a ledge): every other one that it puts within
+  // GUIDE_ALLOWANCE of the lowest exact clearance so far is worked out exactly too, and searched around where it is
+  // lower still.
+  for (const { x, value } of others) {
     if (value - GUIDE_ALLOWANCE * span >= result.clearanceM) break;
     // A place already worked out is no lower than the lowest so far, so it is not searched again.
     const lowestSoFar = result.clearanceM;
